@@ -1,1 +1,3 @@
-﻿Console.WriteLine("Hello, World!");
+using DesignCompiler.Cli;
+
+return TrialcApp.Run(args, Console.Out, Console.Error);

@@ -1,0 +1,7 @@
+namespace DesignCompiler.Diagnostics;
+
+public enum Severity
+{
+    Warning,
+    Error,
+}
