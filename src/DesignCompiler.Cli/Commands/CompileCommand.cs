@@ -1,13 +1,97 @@
 using System.CommandLine;
+using DesignCompiler.Diagnostics;
+using DesignCompiler.Planning;
+using DesignCompiler.Rendering;
+using DesignCompiler.Rendering.Models;
+using DesignCompiler.Rendering.Output;
 
 namespace DesignCompiler.Cli.Commands;
 
+/// <summary>
+/// <c>trialc compile DESIGN --out DIR</c>: the next round's crew sheets (CSV, HTML), the plan
+/// (JSON) and a summary (Markdown). With <c>--format json</c> the plan goes to standard output.
+/// </summary>
 internal static class CompileCommand
 {
     public static Command Create(CliConsole console)
     {
+        var design = new Argument<string>("DESIGN") { Description = "The design file (*.trial)." };
+        var output = new Option<string?>("--out") { Description = "Folder for the sheets; created if missing." };
+        var format = new Option<string>("--format")
+        {
+            Description = "files: write sheets to --out (default); json: print the round plan to standard output.",
+            DefaultValueFactory = _ => "files",
+        };
+        format.AcceptOnlyFromAmong("files", "json");
+
         var command = new Command("compile", "Compile the next round of a design into allocation sheets.");
-        command.SetAction(_ => { console.Error.WriteLine("trialc: compile is not built yet"); return ExitCodes.InputErrors; });
+        command.Arguments.Add(design);
+        command.Options.Add(output);
+        command.Options.Add(format);
+        command.SetAction(parse => Run(console, parse.GetValue(design)!, parse.GetValue(output), parse.GetValue(format)!));
         return command;
+    }
+
+    private static int Run(CliConsole console, string path, string? outDirectory, string format)
+    {
+        if (format == "files" && string.IsNullOrWhiteSpace(outDirectory))
+        {
+            console.Error.WriteLine("trialc: compile needs --out DIR for the sheets, or --format json to print the plan");
+            return ExitCodes.Usage;
+        }
+
+        var (checkedDesign, diagnostics) = DesignLoader.Load(path);
+        if (console.Report(diagnostics) || checkedDesign is null) return ExitCodes.InputErrors;
+
+        var (planner, problem) = RoundPlanner.For(checkedDesign);
+        if (planner is null)
+        {
+            console.Report([problem!]);
+            return ExitCodes.InputErrors;
+        }
+
+        var state = new TrialState(checkedDesign.Arms.Count);
+        var result = planner.Plan(state, 1);
+        if (console.Report(result.Diagnostics) || result.Plan is null)
+        {
+            if (result.StopReason is not null) console.Out.WriteLine(result.StopReason);
+            return result.Plan is null && result.StopReason is not null ? ExitCodes.Ok : ExitCodes.InputErrors;
+        }
+
+        var plan = result.Plan;
+        if (format == "json")
+        {
+            console.Out.Write(RoundOutputs.Json(plan, checkedDesign));
+            return ExitCodes.Ok;
+        }
+
+        var stem = Path.GetFileNameWithoutExtension(path);
+        var (files, renderProblems) = RoundOutputs.Render(plan, checkedDesign, stem);
+        if (console.Report(renderProblems)) return ExitCodes.InputErrors;
+        var failure = AtomicOutput.WriteAll(outDirectory!, files);
+        if (failure is not null)
+        {
+            console.Report([new Diagnostic(DiagnosticCatalog.OutputUnwritable, SourceLocation.File(outDirectory!), [failure])]);
+            return ExitCodes.InputErrors;
+        }
+
+        PlanSummary.Write(console.Out, plan);
+        foreach (var (name, _) in files) console.Out.WriteLine("  wrote " + Path.Combine(outDirectory!, name));
+        return ExitCodes.Ok;
+    }
+}
+
+/// <summary>The few lines a person reads after compiling: plots and P(best) per arm.</summary>
+internal static class PlanSummary
+{
+    public static void Write(TextWriter writer, RoundPlan plan)
+    {
+        writer.WriteLine(FormattableString.Invariant($"{plan.Trial}: round {plan.Round} of {plan.Rounds}, {plan.Plots} plots, policy {plan.Policy}"));
+        writer.WriteLine("  arm       plots  P(best)  mean      95% interval          status");
+        foreach (var arm in plan.Arms)
+        {
+            writer.WriteLine(FormattableString.Invariant(
+                $"  {arm.Code,-9} {arm.Plots,5}  {NumberText.Probability(arm.ProbabilityBest),7}  {NumberText.Significant(arm.PosteriorMean),-8}  {NumberText.Significant(arm.CredibleLower) + " to " + NumberText.Significant(arm.CredibleUpper),-20}  {SheetModelBuilder.StatusText(arm.Status)}"));
+        }
     }
 }

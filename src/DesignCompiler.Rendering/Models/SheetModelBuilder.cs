@@ -1,0 +1,68 @@
+using DesignCompiler.Binding;
+using DesignCompiler.Planning;
+
+namespace DesignCompiler.Rendering.Models;
+
+/// <summary>Formats a round plan into the model templates see. Formatting only: no figure is computed here.</summary>
+public static class SheetModelBuilder
+{
+    /// <summary>Printed on every sheet: field work involves agrochemicals and machinery.</summary>
+    public const string Caution =
+        "Caution: apply every treatment following its product label, local regulations and qualified agronomic advice. " +
+        "Wear the protective equipment the label requires, and keep people and animals out of treated plots for the time it states.";
+
+    public static SheetModel Build(RoundPlan plan, CheckedDesign design, string toolVersion, string? dateIssued = null)
+    {
+        var arms = plan.Arms.Select(Arm).ToList();
+        var blocks = plan.Blocks.Select((b, j) => Block(plan, b, j, design)).ToList();
+        return new SheetModel(
+            plan.Trial, plan.Round, plan.Rounds, plan.DesignHash, plan.DesignHash[..12],
+            plan.Seed.ToString(System.Globalization.CultureInfo.InvariantCulture), toolVersion, plan.Policy,
+            plan.OutcomeName, plan.OutcomeUnit ?? "", plan.OutcomeFamily, OutcomeValues(design.Outcome), plan.ValueUnit ?? "",
+            dateIssued ?? "", plan.Plots, plan.PlotsRecorded, NumberText.Exact(plan.ProbabilityBestErrorBound), Caution, arms, blocks);
+    }
+
+    /// <summary>What a crew may write in the outcome column, in words.</summary>
+    public static string OutcomeValues(OutcomeSpec outcome) => outcome.Family switch
+    {
+        OutcomeFamily.Bernoulli => "1 (yes) or 0 (no)",
+        OutcomeFamily.Binomial => FormattableString.Invariant($"a whole number from 0 to {outcome.Trials}"),
+        OutcomeFamily.Count => "a whole count, 0 or more",
+        _ => "a number" + (outcome.Unit is null ? "" : " in " + outcome.Unit),
+    } + "; or 'missing: reason'";
+
+    private static ArmModel Arm(ArmPlan arm) => new(
+        arm.Code, arm.Label, arm.IsControl, StatusText(arm.Status), arm.Plots, arm.PlotsRecorded,
+        NumberText.Exact(arm.TargetShare), NumberText.Percent(arm.TargetShare),
+        NumberText.Exact(arm.ProbabilityBest), NumberText.Probability(arm.ProbabilityBest),
+        NumberText.Exact(arm.PosteriorMean), NumberText.Significant(arm.PosteriorMean),
+        NumberText.Exact(arm.CredibleLower), NumberText.Exact(arm.CredibleUpper),
+        NumberText.Significant(arm.CredibleLower) + " to " + NumberText.Significant(arm.CredibleUpper),
+        NumberText.Exact(arm.ExpectedLoss), NumberText.Significant(arm.ExpectedLoss));
+
+    public static string StatusText(ArmStatus status) => status switch
+    {
+        ArmStatus.InPlay => "in play",
+        ArmStatus.NotYetAvailable => "not yet available",
+        ArmStatus.NoLongerAvailable => "no longer available",
+        ArmStatus.OutOfStock => "out of stock",
+        _ => "dropped",
+    };
+
+    private static BlockModel Block(RoundPlan plan, BlockPlan block, int index, CheckedDesign design)
+    {
+        var plots = plan.Assignments.Where(a => a.BlockIndex == index)
+            .Select(a => new PlotModel(a.Block, a.PlotId, a.PlotIndex + 1, Text(a.Row), Text(a.Column), a.ArmCode, design.Arms[a.Arm].Label))
+            .ToList();
+        var counts = plan.Arms.Select(a => new CountModel(a.Code, a.Label, block.Counts[a.Index])).ToList();
+        var hasLayout = block.Rows is not null && block.Columns is not null;
+        var map = hasLayout
+            ? Enumerable.Range(0, block.Rows!.Value)
+                .Select(r => new MapRowModel(r + 1, plots.Skip(r * block.Columns!.Value).Take(block.Columns.Value).ToList()))
+                .ToList()
+            : [];
+        return new BlockModel(block.Name, block.Plots, hasLayout, block.Rows ?? 0, block.Columns ?? 0, counts, plots, map);
+    }
+
+    private static string Text(int? value) => value?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "";
+}

@@ -1,0 +1,39 @@
+namespace DesignCompiler.Rendering.Output;
+
+/// <summary>
+/// Writes a set of output files so that none is ever seen half-written: each goes to a
+/// temporary name in the target folder first, and only when all are written are they
+/// renamed into place. On failure the temporary files are removed and the old outputs stay.
+/// </summary>
+public static class AtomicOutput
+{
+    public static string? WriteAll(string directory, IReadOnlyList<(string Name, byte[] Content)> files)
+    {
+        var temporaries = new List<(string Temporary, string Final)>();
+        try
+        {
+            Directory.CreateDirectory(directory);
+            foreach (var (name, content) in files)
+            {
+                var final = Path.Combine(directory, name);
+                var temporary = Path.Combine(directory, "." + name + ".partial-" + Environment.ProcessId);
+                temporaries.Add((temporary, final));
+                using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
+                {
+                    stream.Write(content);
+                    stream.Flush(flushToDisk: true);
+                }
+            }
+            foreach (var (temporary, final) in temporaries) File.Move(temporary, final, overwrite: true);
+            return null;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or NotSupportedException or ArgumentException)
+        {
+            foreach (var (temporary, _) in temporaries)
+            {
+                try { File.Delete(temporary); } catch (IOException) { } catch (UnauthorizedAccessException) { }
+            }
+            return e is UnauthorizedAccessException ? $"permission denied writing to {directory}" : e.Message;
+        }
+    }
+}

@@ -1,0 +1,166 @@
+using DesignCompiler.Binding;
+using DesignCompiler.Diagnostics;
+using DesignCompiler.Numerics;
+using DesignCompiler.Planning.Allocation;
+using DesignCompiler.Planning.Families;
+using DesignCompiler.Planning.Limits;
+using DesignCompiler.Planning.Placement;
+using DesignCompiler.Planning.Policies;
+
+namespace DesignCompiler.Planning;
+
+/// <summary>A round's plan, or why the trial issues no plan: stopped by a rule, or limits that cannot hold.</summary>
+public sealed record PlanResult(RoundPlan? Plan, string? StopReason, IReadOnlyList<Diagnostic> Diagnostics)
+{
+    public bool HasErrors => Diagnostics.Any(d => d.Severity == Severity.Error);
+}
+
+/// <summary>
+/// The one planner. From a checked design and what is known before a round it computes
+/// the posteriors, applies drop and stop rules, asks the policy for target shares, turns
+/// them into whole plots that meet every limit, splits them over blocks and places them
+/// on plots. <c>compile</c> and the simulator both call <see cref="Plan"/>; there is no
+/// second copy of any step.
+/// </summary>
+public sealed class RoundPlanner
+{
+    private readonly CheckedDesign _design;
+    private readonly IOutcomeModel _model;
+    private readonly IAllocationPolicy _policy;
+
+    private RoundPlanner(CheckedDesign design, IOutcomeModel model, IAllocationPolicy policy)
+    {
+        _design = design;
+        _model = model;
+        _policy = policy;
+    }
+
+    public CheckedDesign Design => _design;
+    public IOutcomeModel Model => _model;
+
+    /// <summary>A planner for the design, or a diagnostic when the design asks for what is not supported.</summary>
+    public static (RoundPlanner? Planner, Diagnostic? Problem) For(CheckedDesign design)
+    {
+        var policy = AllocationPolicies.For(design.Policy);
+        if (policy is null)
+            return (null, new Diagnostic(DiagnosticCatalog.NotSupportedYet, design.Locate(design.Policy.Span),
+                [$"the planner does not support policy '{design.Policy.Name}' yet; use 'thompson' or 'equal'"]));
+        return (new RoundPlanner(design, OutcomeModels.For(design.Outcome), policy), null);
+    }
+
+    public PlanResult Plan(TrialState state, int round)
+    {
+        var design = _design;
+        if (round < 1 || round > design.Rounds)
+            return Fail(DiagnosticCatalog.RoundOutOfRange, design.Locate(default), round, design.Rounds);
+
+        var arms = design.Arms.Count;
+        var posteriors = new IMarginal[arms];
+        var values = new IMarginal[arms];
+        var scale = design.Valuation.Scale;
+        for (var i = 0; i < arms; i++)
+        {
+            posteriors[i] = _model.Posterior(design.Arms[i].Prior, state.Statistics[i]);
+            values[i] = new AffineMarginal(posteriors[i], scale, -design.Arms[i].Cost);
+        }
+
+        var dropped = (bool[])state.Dropped.Clone();
+        var inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
+        var summary = BestArmSummary.Of(values, inTrial);
+
+        // Drop rules, then stop rules, on what is known after the last recorded round.
+        var newlyDropped = new bool[arms];
+        if (state.RoundsCompleted >= 1)
+        {
+            foreach (var rule in design.DropRules)
+            {
+                if (state.RoundsCompleted < rule.AfterRound) continue;
+                foreach (var i in inTrial)
+                    if (i != design.Control && rule.Criterion.Holds(summary.Metric(rule.Criterion.Metric, i)))
+                        newlyDropped[i] = true;
+            }
+            if (newlyDropped.Any(d => d))
+            {
+                for (var i = 0; i < arms; i++) dropped[i] |= newlyDropped[i];
+                inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
+                summary = BestArmSummary.Of(values, inTrial);
+            }
+
+            foreach (var rule in design.StopRules)
+            {
+                if (state.RoundsCompleted < rule.AfterRound) continue;
+                var leader = summary.Leader;
+                var value = summary.Metric(rule.Criterion.Metric, leader);
+                if (rule.Criterion.Holds(value))
+                    return new PlanResult(null, FormattableString.Invariant(
+                        $"the trial stops after round {state.RoundsCompleted}: '{rule.Criterion.Describe()}' holds for {design.Arms[leader].Code} ({value:0.####})"), []);
+            }
+        }
+
+        var constraints = RoundConstraints.Resolve(design, round, state.PlotsIssued, dropped);
+        var available = constraints.Available;
+        for (var i = 0; i < arms; i++)
+        {
+            // An arm whose stock is used up or held back for later minimums sits this round out.
+            if (available[i] && constraints.RoundMaximum[i] == 0 && constraints.RoundMaximumSource[i] is StockLimit)
+                available[i] = false;
+        }
+
+        var sown = Enumerable.Range(0, arms).Where(i => available[i]).ToList();
+        var allocationSummary = sown.SequenceEqual(inTrial) ? summary : BestArmSummary.Of(values, sown);
+
+        var shares = new double[arms];
+        _policy.TargetShares(new PolicyContext(design, round, design.PlotsPerRound, available, values,
+            allocationSummary.ProbabilityBest, state.Statistics), shares);
+
+        var totals = BoundedApportionment.Apportion(shares, design.PlotsPerRound, constraints.RoundMinimum, constraints.RoundMaximum);
+        if (!totals.IsFeasible) return InfeasibilityReport.ForRound(design, constraints, totals);
+
+        var table = ControlledRounding.Round(totals.Counts, design.Blocks.Select(b => b.Plots).ToArray(),
+            constraints.CellMinimum, constraints.CellMaximum);
+        if (!table.IsFeasible) return InfeasibilityReport.ForBlocks(design, constraints, totals.Counts, table);
+
+        var assignments = PlotPlacer.Place(design, round, table.Counts);
+        var plan = BuildPlan(state, round, posteriors, summary, shares, totals.Counts, table.Counts, assignments, dropped, newlyDropped, constraints);
+        return new PlanResult(plan, null, []);
+    }
+
+    private RoundPlan BuildPlan(
+        TrialState state, int round, IMarginal[] posteriors, BestArmSummary summary, double[] shares,
+        int[] totals, int[,] table, IReadOnlyList<PlotAssignment> assignments, bool[] dropped, bool[] newlyDropped,
+        RoundConstraints constraints)
+    {
+        var design = _design;
+        var armPlans = new List<ArmPlan>();
+        for (var i = 0; i < design.Arms.Count; i++)
+        {
+            var arm = design.Arms[i];
+            var interval = CredibleInterval.EqualTailed(posteriors[i], 0.95);
+            armPlans.Add(new ArmPlan(i, arm.Code, arm.Label, i == design.Control, StatusOf(i, round, dropped, constraints),
+                totals[i], shares[i], summary.ProbabilityBest[i], posteriors[i].Mean, interval.Lower, interval.Upper,
+                summary.ExpectedLoss[i], state.Statistics[i].Count));
+        }
+
+        var blocks = design.Blocks.Select((b, j) =>
+            new BlockPlan(b.Name, b.Plots, b.Rows, b.Columns, Enumerable.Range(0, design.Arms.Count).Select(i => table[i, j]).ToList())).ToList();
+
+        var valueUnit = design.Valuation.HasPrice ? design.Valuation.Currency ?? "money" : design.Outcome.Unit;
+        return new RoundPlan(design.Name, round, design.Rounds, design.Hash, design.Seed, design.Policy.Name,
+            design.Outcome.Name, design.Outcome.Unit, design.Outcome.FamilyText, valueUnit,
+            armPlans, blocks, assignments, summary.ErrorBound, state.PlotsRecorded);
+    }
+
+    private ArmStatus StatusOf(int arm, int round, bool[] dropped, RoundConstraints constraints)
+    {
+        if (dropped[arm]) return ArmStatus.Dropped;
+        if (!RoundConstraints.IsInWindow(_design, arm, round))
+        {
+            var opens = _design.Windows.Where(w => w.Arm == arm).Select(w => w.FromRound).DefaultIfEmpty(1).Max();
+            return round < opens ? ArmStatus.NotYetAvailable : ArmStatus.NoLongerAvailable;
+        }
+        return constraints.Available[arm] ? ArmStatus.InPlay : ArmStatus.OutOfStock;
+    }
+
+    private static PlanResult Fail(DiagnosticDescriptor descriptor, SourceLocation location, params object[] arguments) =>
+        new(null, null, [new Diagnostic(descriptor, location, arguments)]);
+}

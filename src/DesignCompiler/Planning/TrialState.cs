@@ -1,0 +1,41 @@
+namespace DesignCompiler.Planning;
+
+/// <summary>
+/// What the planner knows before a round: the statistics of every recorded plot per arm,
+/// plots issued per arm so far (for stock), which arms are dropped, and how many rounds
+/// have results. The simulator keeps one per simulated trial and updates it in place; the
+/// compiler builds one from recorded data.
+/// </summary>
+public sealed class TrialState
+{
+    public TrialState(int arms)
+    {
+        Statistics = new ArmStatistics[arms];
+        PlotsIssued = new int[arms];
+        Dropped = new bool[arms];
+    }
+
+    public ArmStatistics[] Statistics { get; }
+    public int[] PlotsIssued { get; }
+    public bool[] Dropped { get; }
+    public int RoundsCompleted { get; set; }
+
+    public int PlotsRecorded => Statistics.Sum(s => s.Count);
+
+    /// <summary>Adds one recorded plot's outcome to its arm.</summary>
+    public void Record(int arm, double value) => Statistics[arm] = Statistics[arm].Add(value);
+
+    /// <summary>Counts the plan's plots against each arm's stock.</summary>
+    public void Issue(RoundPlan plan)
+    {
+        foreach (var arm in plan.Arms) PlotsIssued[arm.Index] += arm.Plots;
+    }
+
+    public void Reset()
+    {
+        Array.Clear(Statistics);
+        Array.Clear(PlotsIssued);
+        Array.Clear(Dropped);
+        RoundsCompleted = 0;
+    }
+}
