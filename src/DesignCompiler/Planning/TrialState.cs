@@ -25,10 +25,14 @@ public sealed class TrialState
     /// <summary>Adds one recorded plot's outcome to its arm.</summary>
     public void Record(int arm, double value) => Statistics[arm] = Statistics[arm].Add(value);
 
-    /// <summary>Counts the plan's plots against each arm's stock.</summary>
+    /// <summary>Takes an issued plan into account: its plots count against each arm's stock, and arms it dropped stay dropped.</summary>
     public void Issue(RoundPlan plan)
     {
-        foreach (var arm in plan.Arms) PlotsIssued[arm.Index] += arm.Plots;
+        foreach (var arm in plan.Arms)
+        {
+            PlotsIssued[arm.Index] += arm.Plots;
+            if (arm.Status == ArmStatus.Dropped) Dropped[arm.Index] = true;
+        }
     }
 
     public void Reset()
