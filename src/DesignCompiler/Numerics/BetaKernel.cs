@@ -1,0 +1,113 @@
+namespace DesignCompiler.Numerics;
+
+/// <summary>
+/// Everything about Beta(a,b) that does not depend on x, computed once, plus the accurate prefactor
+/// x^a y^b / B(a,b) (y = 1 − x) that both the density and the incomplete beta function need.
+/// </summary>
+/// <remarks>
+/// For large a and b the logarithm of the prefactor is a difference of numbers of size (a+b)·ln 2 whose
+/// result is O(1). It is formed around the mean p = a/(a+b) instead: with d = x − p,
+/// ln prefactor = a·L(d/p) + b·L(−d/q) + d·(a/p − b/q) + ½ ln(ab/(2π(a+b))) + δ(a+b) − δ(a) − δ(b),
+/// where L(t) = ln(1+t) − t and δ is the Stirling remainder. The linear terms vanish for the exact mean;
+/// they are kept, computed with fused multiply-adds, because p and q = b/(a+b) are rounded.
+/// </remarks>
+internal readonly struct BetaKernel
+{
+    private readonly bool centred;
+    private readonly double mean, meanComplement, roundingGap, linearSlope, logConstant, switchPoint;
+
+    public BetaKernel(double a, double b)
+    {
+        A = a;
+        B = b;
+        switchPoint = (a + 1.0) / (a + b + 2.0);
+        centred = Math.Min(a, b) >= SpecialFunctions.StirlingThreshold;
+        if (centred)
+        {
+            double s = a + b;
+            mean = a / s;
+            meanComplement = b / s;
+            roundingGap = mean >= 0.5 ? (1.0 - mean) - meanComplement : (1.0 - meanComplement) - mean;
+            double bp = b * mean, bpError = Math.FusedMultiplyAdd(b, mean, -bp);
+            double aqMinusBp = Math.FusedMultiplyAdd(a, meanComplement, -bp) - bpError;
+            linearSlope = aqMinusBp / (mean * meanComplement);
+            logConstant = 0.5 * Math.Log(b * mean) - SpecialFunctions.HalfLogTwoPi
+                + StirlingSeries.Correction(s) - StirlingSeries.Correction(a) - StirlingSeries.Correction(b);
+        }
+        else
+        {
+            mean = a / (a + b);
+            meanComplement = b / (a + b);
+            logConstant = -SpecialFunctions.LogBeta(a, b);
+        }
+    }
+
+    public double A { get; }
+
+    public double B { get; }
+
+    public double Mean => mean;
+
+    public BetaKernel Swapped => new(B, A);
+
+    /// <summary>
+    /// ln(x^a y^b / B(a,b)) for 0 &lt; x &lt; 1 with y = 1 − x. Both are passed so that whichever is below ½
+    /// is used as given; the other is only its complement.
+    /// </summary>
+    public double LogPrefactor(double x, double y)
+    {
+        if (centred)
+        {
+            double d = x <= 0.5 ? x - mean : (meanComplement - y) + roundingGap;
+            double tx = d / mean, ty = (roundingGap - d) / meanComplement;
+            double lx = Math.Abs(tx) <= 0.5 ? SpecialFunctions.Log1pMinusX(tx) : Math.Log(x / mean) - tx;
+            double ly = Math.Abs(ty) <= 0.5 ? SpecialFunctions.Log1pMinusX(ty) : Math.Log(y / meanComplement) - ty;
+            return A * lx + B * ly + d * linearSlope + logConstant;
+        }
+        return A * LogOf(x, y) + B * LogOf(y, x) + logConstant;
+    }
+
+    /// <summary>ln of the density x^(a−1) y^(b−1) / B(a,b).</summary>
+    public double LogDensity(double x, double y) => LogPrefactor(x, y) - LogOf(x, y) - LogOf(y, x);
+
+    /// <summary>Both tails, each computed directly where it is the small one, so neither cancels.</summary>
+    public void Tails(double x, double y, out double lower, out double upper)
+    {
+        if (!(x > 0)) { lower = 0; upper = 1; return; }
+        if (!(y > 0)) { lower = 1; upper = 0; return; }
+        TailsFromLogPrefactor(x, y, LogPrefactor(x, y), out lower, out upper);
+    }
+
+    /// <summary>Density and both tails at one point; they share the prefactor, the costly part.</summary>
+    public void Evaluate(double x, double y, out double density, out double lower, out double upper)
+    {
+        if (!(x > 0) || !(y > 0))
+        {
+            density = 0;
+            lower = x > 0 ? 1 : 0;
+            upper = 1 - lower;
+            return;
+        }
+        double logPrefactor = LogPrefactor(x, y);
+        density = Math.Exp(logPrefactor) / (x * y);
+        TailsFromLogPrefactor(x, y, logPrefactor, out lower, out upper);
+    }
+
+    private void TailsFromLogPrefactor(double x, double y, double logPrefactor, out double lower, out double upper)
+    {
+        double prefactor = Math.Exp(logPrefactor);
+        if (x < switchPoint)
+        {
+            lower = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(A, B, x) / A);
+            upper = 1.0 - lower;
+        }
+        else
+        {
+            upper = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(B, A, y) / B);
+            lower = 1.0 - upper;
+        }
+    }
+
+    // ln u where u + v = 1: the logarithm of whichever is smaller is taken directly, the other via log1p.
+    private static double LogOf(double u, double v) => u <= 0.5 ? Math.Log(u) : SpecialFunctions.Log1p(-v);
+}

@@ -1,0 +1,105 @@
+using System.Globalization;
+
+namespace DesignCompiler.Numerics;
+
+/// <summary>Beta(a, b), the posterior of a success rate.</summary>
+public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IEquatable<BetaMarginal>
+{
+    private readonly BetaKernel kernel;
+
+    public BetaMarginal(double a, double b)
+    {
+        if (!IncompleteBeta.ValidParameters(a, b)) throw new ArgumentOutOfRangeException(nameof(a), "Beta parameters must be positive and finite.");
+        A = a;
+        B = b;
+        kernel = new BetaKernel(a, b);
+        double s = a + b;
+        Mean = a / s;
+        StdDev = Math.Sqrt(Mean * (b / s) / (s + 1.0));
+    }
+
+    public double A { get; }
+
+    public double B { get; }
+
+    public double Mean { get; }
+
+    public double StdDev { get; }
+
+    public double LowerBound => 0.0;
+
+    public double UpperBound => 1.0;
+
+    public double LogDensity(double x)
+    {
+        if (double.IsNaN(x)) return x;
+        if (x < 0 || x > 1) return double.NegativeInfinity;
+        if (x == 0) return EndpointLogDensity(A, B);
+        if (x == 1) return EndpointLogDensity(B, A);
+        return kernel.LogDensity(x, 1.0 - x);
+    }
+
+    public double Density(double x) => Math.Exp(LogDensity(x));
+
+    public double Cdf(double x)
+    {
+        if (double.IsNaN(x)) return x;
+        kernel.Tails(x, 1.0 - x, out double lower, out _);
+        return lower;
+    }
+
+    public double UpperTail(double x)
+    {
+        if (double.IsNaN(x)) return x;
+        kernel.Tails(x, 1.0 - x, out _, out double upper);
+        return upper;
+    }
+
+    public double Quantile(double p)
+    {
+        if (double.IsNaN(p) || p < 0 || p > 1) return double.NaN;
+        IncompleteBeta.Quantile(kernel, p, 1.0 - p, IncompleteBeta.FullPrecision, out double x, out _);
+        return x;
+    }
+
+    double IQuadratureProfile.UpperQuantile(double q)
+    {
+        if (double.IsNaN(q) || q < 0 || q > 1) return double.NaN;
+        IncompleteBeta.Quantile(kernel, 1.0 - q, q, IncompleteBeta.FullPrecision, out double x, out _);
+        return x;
+    }
+
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    {
+        const double coarse = 1e-3;
+        IncompleteBeta.Quantile(kernel, tailMass, 1.0 - tailMass, coarse, out lo, out _);
+        IncompleteBeta.Quantile(kernel, 1.0 - tailMass, tailMass, coarse, out hi, out _);
+        // A quantile that rounds onto an end of [0,1] would leave no room for the geometric panels
+        // that resolve the singular density there; the mass beyond is added by the caller's tail term.
+        lo = Math.Max(lo, 1e-300);
+        hi = Math.Min(hi, Math.BitDecrement(1.0));
+    }
+
+    double IQuadratureProfile.PanelWidth(double x, bool forward)
+    {
+        double w = PanelRules.StdDevMultiple * StdDev;
+        if (!PanelRules.IsInteger(A)) w = Math.Min(w, PanelRules.NearBranchPoint(x, awayFromIt: forward));
+        if (!PanelRules.IsInteger(B)) w = Math.Min(w, PanelRules.NearBranchPoint(1.0 - x, awayFromIt: !forward));
+        return w;
+    }
+
+    void IQuadratureProfile.Evaluate(double x, out double density, out double cdf, out double upperTail) =>
+        kernel.Evaluate(x, 1.0 - x, out density, out cdf, out upperTail);
+
+    public bool Equals(BetaMarginal? other) => other is not null && A.Equals(other.A) && B.Equals(other.B);
+
+    public override bool Equals(object? obj) => Equals(obj as BetaMarginal);
+
+    public override int GetHashCode() => HashCode.Combine(typeof(BetaMarginal), A, B);
+
+    public override string ToString() => string.Create(CultureInfo.InvariantCulture, $"Beta({A:R}, {B:R})");
+
+    // At x = 0 the density is x^(a−1)·(1/B(a,b)): infinite, finite or zero as a is below, at or above 1.
+    private static double EndpointLogDensity(double near, double far) =>
+        near < 1 ? double.PositiveInfinity : near == 1 ? Math.Log(far) : double.NegativeInfinity;
+}

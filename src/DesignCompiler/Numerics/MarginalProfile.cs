@@ -1,0 +1,53 @@
+namespace DesignCompiler.Numerics;
+
+/// <summary>
+/// The quadrature's view of any <see cref="IMarginal"/>: the built-in marginals answer through
+/// <see cref="IQuadratureProfile"/>; any other implementation gets generic answers from its public members.
+/// </summary>
+internal static class MarginalProfile
+{
+    internal static double UpperQuantile(IMarginal m, double q) =>
+        m is IQuadratureProfile p ? p.UpperQuantile(q) : m.Quantile(1.0 - q);
+
+    internal static void Support(IMarginal m, double tailMass, out double lo, out double hi)
+    {
+        if (m is IQuadratureProfile p)
+        {
+            p.Support(tailMass, out lo, out hi);
+            return;
+        }
+        lo = Finite(m.Quantile(tailMass), m.LowerBound, m, -1);
+        hi = Finite(m.Quantile(1.0 - tailMass), m.UpperBound, m, +1);
+    }
+
+    internal static double PanelWidth(IMarginal m, double x, bool forward)
+    {
+        if (m is IQuadratureProfile p) return p.PanelWidth(x, forward);
+        double sd = m.StdDev;
+        if (double.IsFinite(sd) && sd > 0) return PanelRules.StdDevMultiple * sd;
+        // Without a variance the interquartile range is the natural width; heavy tails also get the
+        // adaptive bisection, which is what keeps foreign marginals correct, if not fast.
+        return PanelRules.StdDevMultiple * 0.5 * (m.Quantile(0.75) - m.Quantile(0.25));
+    }
+
+    internal static void Evaluate(IMarginal m, double x, out double density, out double cdf, out double upperTail)
+    {
+        if (m is IQuadratureProfile p)
+        {
+            p.Evaluate(x, out density, out cdf, out upperTail);
+            return;
+        }
+        density = m.Density(x);
+        cdf = m.Cdf(x);
+        upperTail = m.UpperTail(x);
+    }
+
+    private static double Finite(double quantile, double bound, IMarginal m, int side)
+    {
+        if (double.IsFinite(quantile)) return quantile;
+        if (double.IsFinite(bound)) return bound;
+        double guess = m.Mean + side * 50.0 * m.StdDev;
+        if (double.IsFinite(guess)) return guess;
+        throw new ArgumentException("A marginal without finite tail quantiles or a finite variance cannot be integrated.", nameof(m));
+    }
+}

@@ -1,0 +1,60 @@
+using System.Globalization;
+
+namespace DesignCompiler.Numerics;
+
+/// <summary>Normal(mean, sd), the posterior of a mean with known variance.</summary>
+public sealed class NormalMarginal : IMarginal, IQuadratureProfile, IEquatable<NormalMarginal>
+{
+    public NormalMarginal(double mean, double sd)
+    {
+        if (!double.IsFinite(mean)) throw new ArgumentOutOfRangeException(nameof(mean), "The mean must be finite.");
+        if (!(sd > 0) || !double.IsFinite(sd)) throw new ArgumentOutOfRangeException(nameof(sd), "The standard deviation must be positive and finite.");
+        Mean = mean;
+        StdDev = sd;
+    }
+
+    public double Mean { get; }
+
+    public double StdDev { get; }
+
+    public double LowerBound => double.NegativeInfinity;
+
+    public double UpperBound => double.PositiveInfinity;
+
+    public double LogDensity(double x) => StandardNormal.LogPdf((x - Mean) / StdDev) - Math.Log(StdDev);
+
+    public double Density(double x) => StandardNormal.Pdf((x - Mean) / StdDev) / StdDev;
+
+    public double Cdf(double x) => StandardNormal.Cdf((x - Mean) / StdDev);
+
+    public double UpperTail(double x) => StandardNormal.UpperTail((x - Mean) / StdDev);
+
+    public double Quantile(double p) => Mean + StdDev * StandardNormal.Quantile(p);
+
+    double IQuadratureProfile.UpperQuantile(double q) => Mean + StdDev * StandardNormal.UpperQuantile(q);
+
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    {
+        double z = StandardNormal.UpperQuantile(tailMass);
+        lo = Mean - z * StdDev;
+        hi = Mean + z * StdDev;
+    }
+
+    double IQuadratureProfile.PanelWidth(double x, bool forward) => PanelRules.StdDevMultiple * StdDev;
+
+    void IQuadratureProfile.Evaluate(double x, out double density, out double cdf, out double upperTail)
+    {
+        double z = (x - Mean) / StdDev;
+        density = StandardNormal.Pdf(z) / StdDev;
+        cdf = StandardNormal.Cdf(z);
+        upperTail = StandardNormal.UpperTail(z);
+    }
+
+    public bool Equals(NormalMarginal? other) => other is not null && Mean.Equals(other.Mean) && StdDev.Equals(other.StdDev);
+
+    public override bool Equals(object? obj) => Equals(obj as NormalMarginal);
+
+    public override int GetHashCode() => HashCode.Combine(typeof(NormalMarginal), Mean, StdDev);
+
+    public override string ToString() => string.Create(CultureInfo.InvariantCulture, $"Normal({Mean:R}, {StdDev:R})");
+}

@@ -1,0 +1,97 @@
+namespace DesignCompiler.Numerics;
+
+/// <summary>The standard Student-t distribution with df degrees of freedom (df may be fractional).</summary>
+public static class StudentT
+{
+    // Beyond this a Cornish–Fisher expansion in 1/df takes over from the incomplete beta function,
+    // whose parameter df/2 would leave the range where its continued fraction is fast.
+    internal const double LargeDf = 2e7;
+
+    /// <summary>P(T ≤ t).</summary>
+    public static double Cdf(double df, double t)
+    {
+        if (!ValidDf(df) || double.IsNaN(t)) return double.NaN;
+        Tails(new BetaKernel(0.5 * df, 0.5), df, t, out double lower, out _);
+        return lower;
+    }
+
+    /// <summary>P(T &gt; t), accurate far in the right tail.</summary>
+    public static double UpperTail(double df, double t) => Cdf(df, -t);
+
+    /// <summary>The t with P(T ≤ t) = p.</summary>
+    public static double Quantile(double df, double p)
+    {
+        if (!ValidDf(df) || double.IsNaN(p) || p < 0 || p > 1) return double.NaN;
+        if (p == 0.5) return 0.0;
+        // 1 − p is exact for p > ½, so the right half is solved as the mirror of a lower tail.
+        return p < 0.5
+            ? -UpperHalfQuantile(df, p, IncompleteBeta.FullPrecision)
+            : UpperHalfQuantile(df, 1.0 - p, IncompleteBeta.FullPrecision);
+    }
+
+    internal static bool ValidDf(double df) => df > 0 && !double.IsPositiveInfinity(df);
+
+    /// <summary>
+    /// Both tails at t. With x = df/(df+t²) and y = t²/(df+t²), each formed directly so that neither is a
+    /// rounded complement, P(T &gt; |t|) = ½ I_x(df/2, ½) (DLMF 8.17 with A&amp;S 26.7.1).
+    /// </summary>
+    internal static void Tails(in BetaKernel kernel, double df, double t, out double lower, out double upper)
+    {
+        if (t == 0) { lower = 0.5; upper = 0.5; return; }
+        double absT = Math.Abs(t), x, y;
+        double t2 = t * t;
+        if (double.IsInfinity(t2))
+        {
+            x = df / absT / absT;
+            y = 1.0;
+        }
+        else
+        {
+            x = df / (df + t2);
+            y = t2 / (df + t2);
+        }
+        double farTail;
+        if (df > LargeDf) farTail = LargeDfTail(df, absT);
+        else
+        {
+            kernel.Tails(x, y, out double i, out _);
+            farTail = 0.5 * i;
+        }
+        double nearSide = 1.0 - farTail;
+        if (t < 0) { lower = farTail; upper = nearSide; }
+        else { lower = nearSide; upper = farTail; }
+    }
+
+    /// <summary>The t ≥ 0 with P(T &gt; t) = tail, for 0 &lt; tail ≤ ½.</summary>
+    internal static double UpperHalfQuantile(double df, double tail, double relativeTolerance)
+    {
+        if (tail <= 0) return double.PositiveInfinity;
+        if (df == 1.0) return 1.0 / Math.Tan(Math.PI * tail);
+        if (df == 2.0) return (1.0 - 2.0 * tail) / Math.Sqrt(2.0 * tail * (1.0 - tail));
+        if (df > LargeDf) return CornishFisher(df, -StandardNormal.Quantile(tail));
+        // I_x(df/2, ½) = 2·tail with x = df/(df+t²); the solver returns x and 1 − x each to full relative precision.
+        double r = 2.0 * tail;
+        IncompleteBeta.Quantile(new BetaKernel(0.5 * df, 0.5), r, 1.0 - r, relativeTolerance, out double x, out double y);
+        if (x <= 0) return double.PositiveInfinity;
+        return Math.Sqrt(df) * (Math.Sqrt(y) / Math.Sqrt(x));
+    }
+
+    // A&S 26.7.5: t = z + g1/ν + g2/ν² + g3/ν³; at ν > 2e7 the next term is below 1e-25 for |z| < 40.
+    private static double CornishFisher(double df, double z)
+    {
+        double z2 = z * z;
+        double g1 = (z2 + 1.0) * z / 4.0;
+        double g2 = ((5.0 * z2 + 16.0) * z2 + 3.0) * z / 96.0;
+        double g3 = (((3.0 * z2 + 19.0) * z2 + 17.0) * z2 - 15.0) * z / 384.0;
+        return z + (g1 + (g2 + g3 / df) / df) / df;
+    }
+
+    // For huge df the t tail is the normal tail at the Cornish–Fisher-inverted point; one Newton step
+    // on the expansion above is enough at this df.
+    private static double LargeDfTail(double df, double t)
+    {
+        double z = t;
+        for (int i = 0; i < 3; i++) z -= CornishFisher(df, z) - t;
+        return StandardNormal.UpperTail(z);
+    }
+}
