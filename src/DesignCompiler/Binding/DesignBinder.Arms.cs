@@ -5,9 +5,7 @@ namespace DesignCompiler.Binding;
 
 public sealed partial class DesignBinder
 {
-    /// <summary>Words that would make a limit or scenario ambiguous if they named an arm.</summary>
-    private static readonly HashSet<string> ReservedCodes =
-        ["every", "control", "noise", "from", "prior", "cost", "not", "after", "rest", "arm"];
+    private static readonly HashSet<string> ReservedCodes = [.. DesignGrammar.Keywords];
 
     private List<ArmSpec> BindArms(
         IReadOnlyList<ArmStatementSyntax> statements, DefaultPriorStatementSyntax? defaultPrior,
@@ -67,7 +65,7 @@ public sealed partial class DesignBinder
         if (priors.Count > 0) return BindPrior(priors[0].Prior, outcome);
         if (fallback is not null) return fallback;
         // A default prior that was written but is broken has been reported already.
-        if (hasDefault) return null;
+        if (hasDefault || IsBroken("default")) return null;
         ReportWithHint(DiagnosticCatalog.NoPrior, statement.Code.Span,
             "add 'prior " + SuggestedPrior(outcome) + "' to the arm, or a 'default prior' line", statement.Code.Name);
         return null;
@@ -79,7 +77,7 @@ public sealed partial class DesignBinder
         foreach (var repeat in costs.Skip(1))
             Report(DiagnosticCatalog.DuplicateArmOption, repeat.Span, statement.Code.Name, "cost");
         if (costs.Count == 0) return 0;
-        if (!valuation.HasPrice)
+        if (!valuation.HasPrice && !IsBroken("price"))
             ReportWithHint(DiagnosticCatalog.CostWithoutPrice, costs[0].Span,
                 "add a line such as 'price 180 \"EUR\"' (money per outcome unit)", statement.Code.Name);
         return Finite(costs[0].Cost, "an arm's cost") ?? 0;

@@ -26,6 +26,7 @@ public sealed partial class DesignBinder
 
         if (blocks.Count == 0)
         {
+            if (IsBroken("block")) return null;
             ReportMissing("plots", "say how many plots each round has",
                 "add 'plots 24 per round', or one line per block such as 'block north plots 20 layout 4 x 5'", syntax);
             return null;

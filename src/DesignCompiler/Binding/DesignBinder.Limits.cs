@@ -65,7 +65,7 @@ public sealed partial class DesignBinder
                 return arms.Select(a => a.Index).ToList();
             case LimitTargetKind.Control:
                 if (control is not null) return [control.Value];
-                if (!IsBroken("control"))
+                if (!IsBroken("control") && !_controlWritten)
                     ReportWithHint(DiagnosticCatalog.ControlNotNamed, target.Span, "add a line such as 'control OV'");
                 return null;
             default:

@@ -31,6 +31,8 @@ public sealed partial class DesignBinder
         _broken = broken;
     }
 
+    private bool _controlWritten;
+
     private bool IsBroken(string keyword) => _broken.Contains(keyword) || _broken.Contains("*");
 
     /// <summary>Parse and bind in one step: the usual entry point.</summary>
@@ -57,7 +59,10 @@ public sealed partial class DesignBinder
         var policy = BindPolicy(Single<PolicyStatementSyntax>(statements, "policy"), rounds, outcome);
         var arms = BindArms(statements.OfType<ArmStatementSyntax>().ToList(),
             Single<DefaultPriorStatementSyntax>(statements, "default prior"), outcome, valuation, syntax);
-        var control = BindControl(Single<ControlStatementSyntax>(statements, "control"), arms);
+        var controlStatement = Single<ControlStatementSyntax>(statements, "control");
+        var control = BindControl(controlStatement, arms);
+        // A control that was written but names an arm that could not be bound has been reported.
+        _controlWritten = controlStatement is not null;
         var blocks = BindField(Single<PlotsStatementSyntax>(statements, "plots"), statements.OfType<BlockStatementSyntax>().ToList(), syntax);
         var limits = BindLimits(statements.OfType<LimitStatementSyntax>().ToList(), arms, control, rounds ?? DesignLimits.MaxRounds);
         var (rest, after) = BindRotation(statements.OfType<RotationStatementSyntax>().ToList(), arms, control, rounds);

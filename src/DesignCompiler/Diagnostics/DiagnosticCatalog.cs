@@ -41,7 +41,7 @@ public static class DiagnosticCatalog
     public static readonly DiagnosticDescriptor CostWithoutPrice = Error("TD2024", "arm '{0}' has a cost but the design has no 'price' to weigh it against");
     public static readonly DiagnosticDescriptor PolicyNeedsFamily = Error("TD2025", "policy '{0}' needs {1}");
 
-    public static readonly DiagnosticDescriptor ControlNotNamed = Error("TD2040", "a limit on 'control' needs a 'control ARM' statement");
+    public static readonly DiagnosticDescriptor ControlNotNamed = Error("TD2040", "'control' in a limit or rotation rule needs a 'control ARM' statement");
     public static readonly DiagnosticDescriptor ContradictoryBounds = Error("TD2041", "{0}: the limits on {1} ask for at least {2} and at most {3} plots {4}");
     public static readonly DiagnosticDescriptor MinimumsExceedPlots = Error("TD2042", "{0}{1}: the minimums need {2} plots but there are only {3}");
     public static readonly DiagnosticDescriptor MaximumsBelowPlots = Error("TD2043", "{0}{1}: the maximums allow only {2} of the {3} plots to be sown");

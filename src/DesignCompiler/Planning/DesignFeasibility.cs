@@ -42,7 +42,7 @@ public static class DesignFeasibility
                 .ToList();
             diagnostics.Add(new Diagnostic(first.Descriptor, design.Locate(first.Span), arguments, null, related));
         }
-        return diagnostics;
+        return diagnostics.OrderBy(d => d.Location.Span.Start).ToList();
     }
 
     private static HashSet<int> CheckStocks(CheckedDesign design, List<Diagnostic> diagnostics)
@@ -76,16 +76,18 @@ public static class DesignFeasibility
         for (var i = 0; i < arms.Count; i++)
         {
             if (!c.Available[i] || stockShort.Contains(i)) continue;
-            for (var j = 0; j < blocks.Count; j++)
+            // One clash of two limits is one problem, however many blocks it shows in.
+            var clashes = Enumerable.Range(0, blocks.Count).Where(j => c.CellMinimum[i, j] > c.CellMaximum[i, j]).ToList();
+            foreach (var group in clashes.GroupBy(j => (c.CellMinimumSource[i, j]!.Span, c.CellMaximumSource[i, j]?.Span, c.CellMinimum[i, j], c.CellMaximum[i, j])))
             {
-                if (c.CellMinimum[i, j] <= c.CellMaximum[i, j]) continue;
-                var min = c.CellMinimumSource[i, j]!;
+                var j = group.First();
                 var max = c.CellMaximumSource[i, j];
-                yield return new Problem(DiagnosticCatalog.ContradictoryBounds, min.Span, blocks[j].Name,
-                    [0, "arm '" + arms[i].Code + "'", c.CellMinimum[i, j], c.CellMaximum[i, j], "in block " + blocks[j].Name],
+                yield return new Problem(DiagnosticCatalog.ContradictoryBounds, c.CellMinimumSource[i, j]!.Span, null,
+                    [0, "arm '" + arms[i].Code + "'", c.CellMinimum[i, j], c.CellMaximum[i, j], BlocksText(group.Select(b => blocks[b].Name).ToList())],
                     max is null ? [(blocks[j].Span, $"block {blocks[j].Name} has {blocks[j].Plots} plots")] : [(max.Span, "the maximum is set here")]);
             }
-            if (c.RoundMinimum[i] > c.RoundMaximum[i])
+            // The round's bounds are sums of the block bounds, so a block clash would show again here.
+            if (clashes.Count == 0 && c.RoundMinimum[i] > c.RoundMaximum[i])
             {
                 var span = c.RoundMinimumSource[i]?.Span ?? FirstBlockMinimum(c, i)?.Span ?? arms[i].Span;
                 var related = new List<(TextSpan, string)>();
@@ -97,8 +99,8 @@ public static class DesignFeasibility
 
         for (var j = 0; j < blocks.Count; j++)
         {
-            var needed = 0;
-            var allowed = 0;
+            long needed = 0;
+            long allowed = 0;
             var minSources = new List<BoundLimit>();
             var maxSources = new List<BoundLimit>();
             for (var i = 0; i < arms.Count; i++)
@@ -118,8 +120,8 @@ public static class DesignFeasibility
                     [0, where, allowed, blocks[j].Plots], Notes(maxSources.Skip(1), "another maximum counted here", blocks[j]));
         }
 
-        var roundNeeded = 0;
-        var roundAllowed = 0;
+        long roundNeeded = 0;
+        long roundAllowed = 0;
         var roundMinSources = new List<BoundLimit>();
         var roundMaxSources = new List<object>();
         for (var i = 0; i < arms.Count; i++)
@@ -142,6 +144,11 @@ public static class DesignFeasibility
                 roundMaxSources.Skip(1).Select(m => (SpanOf(m), "another maximum counted here")).ToList());
         }
     }
+
+    private static string BlocksText(IReadOnlyList<string> names) =>
+        names.Count == 1 ? "in block " + names[0]
+        : names.Count <= 4 ? "in blocks " + string.Join(", ", names)
+        : FormattableString.Invariant($"in {names.Count} blocks ({string.Join(", ", names.Take(3))}, ...)");
 
     private static BoundLimit? FirstBlockMinimum(RoundConstraints c, int arm)
     {

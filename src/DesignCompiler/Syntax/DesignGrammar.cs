@@ -375,6 +375,20 @@ internal static class DesignGrammar
             .Or(PlotsStatement).Or(BlockStatement).Or(LimitStatement).Or(RotationStatement)
             .Or(StopStatement).Or(DropStatement).Or(ScenarioStatement);
 
+    /// <summary>
+    /// Every keyword of the language. An arm code may not be one of them (grammar/trial.ebnf),
+    /// so that no limit, rotation or scenario line can be read two ways.
+    /// </summary>
+    internal static readonly IReadOnlyList<string> Keywords =
+    [
+        "trial", "seed", "rounds", "round", "outcome", "goal", "maximize", "minimize", "price", "bernoulli",
+        "binomial", "of", "normal", "noise", "sd", "unknown", "count", "policy", "thompson", "top-two", "beta",
+        "ucb1", "kl-ucb", "c", "epsilon-greedy", "epsilon", "decreasing", "explore-then-commit", "equal",
+        "default", "prior", "arm", "cost", "control", "mean", "worth", "plots", "plot", "gamma", "shape", "rate",
+        "per", "block", "layout", "x", "limit", "every", "stock", "from", "until", "rotation", "rest", "not",
+        "after", "stop", "when", "drop", "best", "loss", "scenario",
+    ];
+
     /// <summary>The words that begin a statement, for "did you mean" hints.</summary>
     internal static readonly IReadOnlyList<string> StatementKeywords =
     [

@@ -38,7 +38,7 @@ public static class DesignParser
         var diagnostics = parsed.Errors
             .Select(e => new Diagnostic(ByCode[e.Code], SourceLocation.In(source, e.Span), [e.Message], e.Hint))
             .ToList();
-        var broken = parsed.Errors.Select(e => e.StatementKeyword).OfType<string>().ToHashSet(StringComparer.Ordinal);
+        var broken = parsed.Errors.SelectMany(e => e.StatementKeywords ?? []).ToHashSet(StringComparer.Ordinal);
         return new ParseResult(parsed.Syntax, diagnostics, broken);
     }
 }

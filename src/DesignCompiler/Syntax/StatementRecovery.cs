@@ -40,7 +40,7 @@ internal static class StatementRecovery
                 var trailing = new SyntaxError(TrailingTextCode,
                     $"unexpected {Describe(result.Remainder)} after the statement; write one statement per line",
                     "start a new line for the next statement, or put a comment after '#'",
-                    WordSpan(result.Remainder), WordAt(at));
+                    WordSpan(result.Remainder), [WordAt(at), WordAt(result.Remainder)]);
                 return Result.Success(new StatementOrError(null, trailing), SkipBroken(at));
             }
 
@@ -67,7 +67,7 @@ internal static class StatementRecovery
             {
                 errors.Add(new SyntaxError(MissingHeaderCode,
                     "a design begins with 'trial \"NAME\" {' on its own line",
-                    "for example: trial \"Late-sown cover mixes\" {", WordSpan(at), "trial"));
+                    "for example: trial \"Late-sown cover mixes\" {", WordSpan(at), ["trial"]));
                 // A design that forgot its header still gets its statements checked.
                 if (!StartsWithStatementKeyword(at)) at = SkipBroken(at);
             }
@@ -118,12 +118,12 @@ internal static class StatementRecovery
                 $"'{word}' does not begin a statement",
                 Suggestions.DidYouMean(word, DesignGrammar.StatementKeywords)
                     ?? "a statement begins with one of: " + string.Join(", ", DesignGrammar.StatementKeywords),
-                WordSpan(at), Suggestions.Closest(word, DesignGrammar.StatementKeywords) ?? word);
+                WordSpan(at), [Suggestions.Closest(word, DesignGrammar.StatementKeywords) ?? word]);
         }
 
         var expected = failure.Expectations.Distinct().ToList();
         var expectation = expected.Count == 0 ? "more" : string.Join(" or ", expected);
-        return new SyntaxError(UnexpectedCode, $"expected {expectation}, found {Describe(at)}", null, WordSpan(at), WordAt(lineStart));
+        return new SyntaxError(UnexpectedCode, $"expected {expectation}, found {Describe(at)}", null, WordSpan(at), [WordAt(lineStart)]);
     }
 
     /// <summary>Blank lines, comment lines and leading blanks between statements.</summary>
@@ -180,7 +180,11 @@ internal static class StatementRecovery
         while (!next.AtEnd)
         {
             var candidate = SkipSeparators(next);
-            if (candidate.AtEnd || candidate.Current == '}' || StartsWithStatementKeyword(candidate)) return candidate;
+            if (candidate.AtEnd || StartsWithStatementKeyword(candidate)) return candidate;
+            // A line holding only '}' closes the broken scenario, unless it is the file's last
+            // brace, which closes the trial.
+            if (candidate.Current == '}')
+                return IsLastContent(candidate) ? candidate : SkipLine(candidate);
             var text = LineFrom(candidate);
             next = SkipLine(candidate);
             if (text.Contains('}')) return next;
@@ -188,8 +192,10 @@ internal static class StatementRecovery
         return next;
     }
 
-    private static bool StartsWithStatementKeyword(IInput input) =>
-        DesignGrammar.StatementKeywords.Contains(WordAt(input)) || WordAt(input) == "trial";
+    private static bool StartsWithStatementKeyword(IInput input) => DesignGrammar.StatementKeywords.Contains(WordAt(input));
+
+    /// <summary>True when nothing but blanks and comments follows the character at <paramref name="input"/>.</summary>
+    private static bool IsLastContent(IInput input) => SkipSeparators(input.Advance()).AtEnd;
 
     private static string LineFrom(IInput input)
     {

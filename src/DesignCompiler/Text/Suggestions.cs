@@ -14,7 +14,8 @@ public static class Suggestions
     {
         string? best = null;
         var bestDistance = int.MaxValue;
-        var allowed = word.Length <= 3 ? 1 : word.Length <= 6 ? 2 : 3;
+        // One edit turns any one- or two-letter code into any other, so short words get a hint only for case.
+        var allowed = word.Length <= 2 ? 0 : word.Length <= 4 ? 1 : word.Length <= 7 ? 2 : 3;
         foreach (var candidate in candidates)
         {
             // A difference in letter case alone is always worth pointing out.
