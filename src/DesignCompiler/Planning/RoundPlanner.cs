@@ -38,15 +38,9 @@ public sealed class RoundPlanner
     public CheckedDesign Design => _design;
     public IOutcomeModel Model => _model;
 
-    /// <summary>A planner for the design, or a diagnostic when the design asks for what is not supported.</summary>
-    public static (RoundPlanner? Planner, Diagnostic? Problem) For(CheckedDesign design)
-    {
-        var policy = AllocationPolicies.For(design.Policy);
-        if (policy is null)
-            return (null, new Diagnostic(DiagnosticCatalog.NotSupportedYet, design.Locate(design.Policy.Span),
-                [$"the planner does not support policy '{design.Policy.Name}' yet; use 'thompson' or 'equal'"]));
-        return (new RoundPlanner(design, OutcomeModels.For(design.Outcome), policy), null);
-    }
+    /// <summary>A planner for the design. Every policy and family of the language is supported.</summary>
+    public static (RoundPlanner? Planner, Diagnostic? Problem) For(CheckedDesign design) =>
+        (new RoundPlanner(design, OutcomeModels.For(design.Outcome), AllocationPolicies.For(design.Policy)), null);
 
     public PlanResult Plan(TrialState state, int round)
     {

@@ -6,11 +6,14 @@ namespace DesignCompiler.Planning.Policies;
 /// <summary>The policy object for each policy of the language; one place to add a policy.</summary>
 public static class AllocationPolicies
 {
-    /// <summary>The policy, or null when the planner does not support it yet.</summary>
-    public static IAllocationPolicy? For(PolicySpec policy) => policy.Kind switch
+    public static IAllocationPolicy For(PolicySpec policy) => policy.Kind switch
     {
         PolicyKind.Thompson => new ThompsonPolicy(),
-        PolicyKind.Equal => new EqualPolicy(),
-        _ => null,
+        PolicyKind.TopTwoThompson => new TopTwoThompsonPolicy(policy.Parameter),
+        PolicyKind.Ucb1 => new Ucb1Policy(),
+        PolicyKind.KlUcb => new KlUcbPolicy(policy.Parameter),
+        PolicyKind.EpsilonGreedy => new EpsilonGreedyPolicy(policy.Parameter, policy.Decreasing),
+        PolicyKind.ExploreThenCommit => new ExploreThenCommitPolicy((int)policy.Parameter),
+        _ => new EqualPolicy(),
     };
 }
