@@ -139,6 +139,9 @@ public sealed partial class DesignBinder
                     if (targets is null || count is null) break;
                     if (rounds is not null && count >= rounds)
                         Report(DiagnosticCatalog.RotationRestTooLong, r.Rounds.Span, count, rounds);
+                    // A plot must grow some arm every round, so resting every arm r rounds needs r + 1 arms.
+                    if (r.Target.Kind == LimitTargetKind.EveryArm && rounds > count && arms.Count <= count)
+                        ReportWithHint(DiagnosticCatalog.RotationNeedsArms, r.Span, "shorten the rest or add arms", count, count + 1, arms.Count);
                     rest.Add(new RestRule(targets, count.Value, r.Span));
                     break;
                 case AfterRotationSyntax a:

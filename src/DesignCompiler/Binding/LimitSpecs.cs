@@ -28,7 +28,7 @@ public sealed record WindowLimit(int Arm, int FromRound, int UntilRound, TextSpa
     public bool Contains(int round) => round >= FromRound && round <= UntilRound;
 }
 
-/// <summary>After growing one of <see cref="Arms"/>, a plot grows none of them for <see cref="Rounds"/> rounds.</summary>
+/// <summary>After a plot grows one of <see cref="Arms"/>, it does not grow that same arm again for the next <see cref="Rounds"/> rounds.</summary>
 public sealed record RestRule(IReadOnlyList<int> Arms, int Rounds, TextSpan Span);
 
 /// <summary><see cref="Arm"/> may not follow <see cref="Previous"/> on the same plot.</summary>

@@ -57,6 +57,7 @@ public static class DiagnosticCatalog
     public static readonly DiagnosticDescriptor ScenarioRepeatedArm = Error("TD2063", "scenario \"{0}\" gives '{1}' twice");
     public static readonly DiagnosticDescriptor ScenarioNoiseNotNormal = Error("TD2064", "'noise' in a scenario applies only to a normal outcome, not {0}");
     public static readonly DiagnosticDescriptor RotationRestTooLong = Warning("TD2070", "a rest of {0} rounds in a {1}-round trial means each plot grows these arms at most once");
+    public static readonly DiagnosticDescriptor RotationNeedsArms = Error("TD2072", "'every arm rest {0} rounds' needs at least {1} arms to sow a plot every round; the design has {2}");
     public static readonly DiagnosticDescriptor RotationSelf = Error("TD2071", "'{0} not after {0}' forbids a repeat; write 'rotation {0} rest 1 round'");
 
     // --- TD3xxx: planning -------------------------------------------------------

@@ -22,11 +22,11 @@ internal static class InfeasibilityReport
                 FormattableString.Invariant($"round {round}: the minimums need {result.Required} plots but the round has {result.Available}"),
                 MinimumSources(c)),
             ApportionmentFailure.MaximumsBelowTotal => (
-                FormattableString.Invariant($"round {round}: the maximums and remaining stock allow only {result.Available} of the {result.Required} plots to be sown"),
-                MaximumSources(c)),
+                FormattableString.Invariant($"round {round}: the maximums, remaining stock and rotation rules allow only {result.Available} of the {result.Required} plots to be sown"),
+                MaximumSources(c).Concat(RotationSources(design, c)).ToList()),
             ApportionmentFailure.MinimumExceedsMaximum => (
                 FormattableString.Invariant($"round {round}: arm '{arm?.Code}' needs at least {result.Required} plots but may have at most {result.Available}"),
-                ArmSources(c, result.ArmIndex)),
+                ArmSources(c, result.ArmIndex).Concat(RotationSources(design, c)).ToList()),
             _ => (FormattableString.Invariant($"round {round}: the plots cannot be shared out ({result.Failure})"), new List<(TextSpan, string)>()),
         };
         return Report(design, message, spans);
@@ -40,6 +40,7 @@ internal static class InfeasibilityReport
         var spans = new List<(TextSpan, string)>();
         if (block is { IsImplicit: false }) spans.Add((block.Span, FormattableString.Invariant($"block {block.Name} has {block.Plots} plots")));
         spans.AddRange(MinimumSources(c));
+        spans.AddRange(RotationSources(design, c));
         var message = result.Failure switch
         {
             ControlledRoundingFailure.ColumnMinimumsExceedTotal => FormattableString.Invariant(
@@ -56,12 +57,31 @@ internal static class InfeasibilityReport
         return Report(design, message, spans);
     }
 
+    public static PlanResult ForRotation(CheckedDesign design, string problem)
+    {
+        var spans = design.RestRules.Select(r => (r.Span, "a rotation rule"))
+            .Concat(design.AfterRules.Select(r => (r.Span, "a rotation rule"))).ToList();
+        var primary = spans.Count > 0 ? design.Locate(spans[0].Span) : SourceLocation.File(design.Source.Path);
+        var related = spans.Skip(1).Select(s => new RelatedLocation(design.Locate(s.Span), s.Item2)).ToList();
+        return new PlanResult(null, null, [new Diagnostic(DiagnosticCatalog.RotationInfeasible, primary, [problem], null, related)]);
+    }
+
     private static PlanResult Report(CheckedDesign design, string message, List<(TextSpan Span, string Note)> spans)
     {
         var distinct = spans.DistinctBy(s => s.Span).ToList();
         var primary = distinct.Count > 0 ? design.Locate(distinct[0].Span) : SourceLocation.File(design.Source.Path);
         var related = distinct.Skip(1).Select(s => new RelatedLocation(design.Locate(s.Span), s.Note)).ToList();
         return new PlanResult(null, null, [new Diagnostic(DiagnosticCatalog.RoundInfeasible, primary, [message], null, related)]);
+    }
+
+    /// <summary>The rotation rules, when they capped where some arm may go this round.</summary>
+    private static IEnumerable<(TextSpan, string)> RotationSources(CheckedDesign design, RoundConstraints c)
+    {
+        var capped = false;
+        foreach (var cell in c.RotationCapped) capped |= cell;
+        if (!capped) return [];
+        return design.RestRules.Select(r => (r.Span, "a rotation rule limits which plots an arm may use"))
+            .Concat(design.AfterRules.Select(r => (r.Span, "a rotation rule limits which plots an arm may use")));
     }
 
     private static List<(TextSpan, string)> MinimumSources(RoundConstraints c)

@@ -91,7 +91,9 @@ public sealed class RoundPlanner
             }
         }
 
-        var constraints = RoundConstraints.Resolve(design, round, state.PlotsIssued, dropped);
+        var rotation = RotationRules.For(design, round, state.History);
+        var constraints = RoundConstraints.Resolve(design, round, state.PlotsIssued, dropped,
+            rotation.Any ? rotation.AllowedPlots(design) : null);
         var available = constraints.Available;
         for (var i = 0; i < arms; i++)
         {
@@ -114,8 +116,9 @@ public sealed class RoundPlanner
             constraints.CellMinimum, constraints.CellMaximum);
         if (!table.IsFeasible) return InfeasibilityReport.ForBlocks(design, constraints, totals.Counts, table);
 
-        var assignments = PlotPlacer.Place(design, round, table.Counts);
-        var plan = BuildPlan(state, round, posteriors, summary, shares, totals.Counts, table.Counts, assignments, dropped, newlyDropped, constraints);
+        var placement = PlotPlacer.Place(design, round, table.Counts, rotation);
+        if (placement.Assignments is null) return InfeasibilityReport.ForRotation(design, placement.Problem!);
+        var plan = BuildPlan(state, round, posteriors, summary, shares, totals.Counts, table.Counts, placement.Assignments, dropped, newlyDropped, constraints);
         return new PlanResult(plan, null, []);
     }
 

@@ -15,6 +15,12 @@ public sealed class TrialState
         Dropped = new bool[arms];
     }
 
+    /// <summary>
+    /// The arm on every plot in each issued round, oldest first; plots in design order (block by
+    /// block, plot by plot). Rotation rules read it.
+    /// </summary>
+    public List<int[]> History { get; } = [];
+
     public ArmStatistics[] Statistics { get; }
     public int[] PlotsIssued { get; }
     public bool[] Dropped { get; }
@@ -33,6 +39,7 @@ public sealed class TrialState
             PlotsIssued[arm.Index] += arm.Plots;
             if (arm.Status == ArmStatus.Dropped) Dropped[arm.Index] = true;
         }
+        History.Add(plan.Assignments.Select(a => a.Arm).ToArray());
     }
 
     public void Reset()
@@ -40,6 +47,7 @@ public sealed class TrialState
         Array.Clear(Statistics);
         Array.Clear(PlotsIssued);
         Array.Clear(Dropped);
+        History.Clear();
         RoundsCompleted = 0;
     }
 }

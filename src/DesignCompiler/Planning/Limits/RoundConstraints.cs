@@ -22,7 +22,11 @@ public sealed class RoundConstraints
         RoundMaximumSource = new object?[arms];
         CellMinimumSource = new BoundLimit?[arms, blocks];
         CellMaximumSource = new BoundLimit?[arms, blocks];
+        RotationCapped = new bool[arms, blocks];
     }
+
+    /// <summary>Cells whose maximum is the number of plots the rotation rules leave for the arm.</summary>
+    public bool[,] RotationCapped { get; }
 
     public int Round { get; }
     public bool[] Available { get; }
@@ -46,7 +50,8 @@ public sealed class RoundConstraints
     /// Stock still needed for the minimums of later rounds is held back, so adaptive rounds
     /// can never use up the seed that a later minimum needs.
     /// </summary>
-    public static RoundConstraints Resolve(CheckedDesign design, int round, ReadOnlySpan<int> stockUsed, ReadOnlySpan<bool> dropped)
+    /// <param name="allowedPlots">When rotation rules apply, how many plots of each block may grow each arm this round.</param>
+    public static RoundConstraints Resolve(CheckedDesign design, int round, ReadOnlySpan<int> stockUsed, ReadOnlySpan<bool> dropped, int[,]? allowedPlots = null)
     {
         var arms = design.Arms.Count;
         var blocks = design.Blocks;
@@ -84,6 +89,17 @@ public sealed class RoundConstraints
                         (result.CellMinimum[i, j], result.CellMinimumSource[i, j]) = (plots, limit);
                     if (limit.Direction == BoundDirection.AtMost && plots < result.CellMaximum[i, j])
                         (result.CellMaximum[i, j], result.CellMaximumSource[i, j]) = (plots, limit);
+                }
+            }
+
+            if (allowedPlots is not null)
+            {
+                for (var j = 0; j < blocks.Count; j++)
+                {
+                    if (allowedPlots[i, j] >= result.CellMaximum[i, j]) continue;
+                    result.CellMaximum[i, j] = allowedPlots[i, j];
+                    result.CellMaximumSource[i, j] = null;
+                    result.RotationCapped[i, j] = true;
                 }
             }
 
