@@ -10,6 +10,8 @@ namespace DesignCompiler.Cli.Commands;
 /// <summary>
 /// <c>trialc compile DESIGN --out DIR</c>: the next round's crew sheets (CSV, HTML), the plan
 /// (JSON) and a summary (Markdown). With <c>--format json</c> the plan goes to standard output.
+/// Without <c>--ledger</c> it compiles round 1 from the design alone; with it, the trial's next
+/// round from what the ledger holds (see <see cref="LedgerCompile"/>).
 /// </summary>
 internal static class CompileCommand
 {
@@ -23,16 +25,32 @@ internal static class CompileCommand
             DefaultValueFactory = _ => "files",
         };
         format.AcceptOnlyFromAmong("files", "json");
+        var ledger = new Option<string?>("--ledger")
+        {
+            Description = "The trial's ledger: compile its next round (or re-issue the round awaiting results) and record it there. Created with round 1.",
+        };
+        var amend = new Option<string?>("--amend")
+        {
+            Description = "With --ledger: accept a design text changed since the last round, recording this reason.",
+        };
+        var round = new Option<int?>("--round")
+        {
+            Description = "With --ledger: the round expected to be compiled; refused when it is not the next one.",
+        };
 
         var command = new Command("compile", "Compile the next round of a design into allocation sheets.");
         command.Arguments.Add(design);
         command.Options.Add(output);
         command.Options.Add(format);
-        command.SetAction(parse => Run(console, parse.GetValue(design)!, parse.GetValue(output), parse.GetValue(format)!));
+        command.Options.Add(ledger);
+        command.Options.Add(amend);
+        command.Options.Add(round);
+        command.SetAction(parse => Run(console, parse.GetValue(design)!, parse.GetValue(output), parse.GetValue(format)!,
+            parse.GetValue(ledger), parse.GetValue(amend), parse.GetValue(round)));
         return command;
     }
 
-    private static int Run(CliConsole console, string path, string? outDirectory, string format)
+    private static int Run(CliConsole console, string path, string? outDirectory, string format, string? ledger, string? amend, int? round)
     {
         if (format == "files" && string.IsNullOrWhiteSpace(outDirectory))
         {
@@ -49,6 +67,16 @@ internal static class CompileCommand
             console.Report([problem!]);
             return ExitCodes.InputErrors;
         }
+
+        if (ledger is not null)
+            return LedgerCompile.Run(console, path, checkedDesign, planner, ledger, outDirectory, format, amend, round);
+        if (amend is not null || round is not null)
+        {
+            console.Error.WriteLine("trialc: --amend and --round apply to a trial's ledger; give --ledger LEDGER as well");
+            return ExitCodes.Usage;
+        }
+        if (File.Exists(LedgerCommandSupport.DefaultPath(path)))
+            console.Error.WriteLine($"trialc: note: {LedgerCommandSupport.DefaultPath(path)} is this design's ledger; without --ledger this compiles round 1 from the design alone");
 
         var state = new TrialState(checkedDesign.Arms.Count);
         var result = planner.Plan(state, 1);

@@ -1,0 +1,53 @@
+using System.Globalization;
+using DesignCompiler.Ledger;
+using DesignCompiler.Rendering.Models;
+
+namespace DesignCompiler.Rendering.Status;
+
+/// <summary>Formats a <see cref="TrialStatus"/> into the model the status templates see. Formatting only.</summary>
+public static class StatusModelBuilder
+{
+    public static StatusModel Build(TrialStatus status, string toolVersion)
+    {
+        var arms = status.Arms.Select(a => new StatusArmModel(
+            a.Code, a.Label, a.IsControl, StatusText(a), a.PlotsIssued, a.PlotsRecorded, a.PlotsMissing,
+            NumberText.Exact(a.PosteriorMean), NumberText.Significant(a.PosteriorMean),
+            NumberText.Exact(a.CredibleLower), NumberText.Exact(a.CredibleUpper),
+            NumberText.Significant(a.CredibleLower) + " to " + NumberText.Significant(a.CredibleUpper),
+            NumberText.Exact(a.ProbabilityBest), NumberText.Probability(a.ProbabilityBest),
+            NumberText.Exact(a.ExpectedLoss), NumberText.Significant(a.ExpectedLoss))).ToList();
+
+        var rules = status.Rules.Select(r => new StatusRuleModel(
+            r.Kind == RuleKind.Stop ? "stop" : "drop", r.Rule, r.InForce, r.Holds, r.Arms, r.Finding)).ToList();
+        var stocks = status.Stocks.Select(s => new StatusStockModel(s.Arm, s.Stock, s.Used, s.Left)).ToList();
+        var history = status.History.Select(h => new StatusRoundModel(
+            h.RoundsRecorded,
+            h.RoundsRecorded == 0 ? "prior" : "after round " + h.RoundsRecorded.ToString(CultureInfo.InvariantCulture),
+            h.ProbabilityBest.Select(NumberText.Exact).ToList(),
+            h.ProbabilityBest.Select(NumberText.Probability).ToList())).ToList();
+        var amendments = status.Amendments.Select(a => new StatusAmendmentModel(
+            a.Entry.Seq.ToString(CultureInfo.InvariantCulture), a.Entry.At, a.Entry.User, a.OldHash[..12], a.NewHash[..12], a.Reason)).ToList();
+
+        return new StatusModel(
+            status.Trial, status.DesignHash, status.DesignHash[..12], status.HeadHash[..12], toolVersion,
+            status.Rounds, status.RoundsIssued, status.RoundsRecorded, status.PlotsIssued, status.PlotsRecorded, status.PlotsMissing,
+            status.OutcomeName, status.OutcomeUnit ?? "", status.OutcomeFamily, status.ValueUnit ?? "", status.Minimize ? "minimize" : "maximize",
+            arms, rules, stocks, history, amendments,
+            NextKindText(status.Next.Kind), status.Next.Round.ToString(CultureInfo.InvariantCulture), status.Next.Text,
+            StatusChartLayout.Layout(status));
+    }
+
+    private static string StatusText(ArmStanding arm) =>
+        arm.Dropped ? "dropped"
+        : arm.LastStatus is { } last ? SheetModelBuilder.StatusText(last)
+        : "not yet sown";
+
+    private static string NextKindText(NextStepKind kind) => kind switch
+    {
+        NextStepKind.CompileNext => "compile-next",
+        NextStepKind.AwaitResults => "await-results",
+        NextStepKind.Stopped => "stopped",
+        NextStepKind.Complete => "complete",
+        _ => "blocked",
+    };
+}

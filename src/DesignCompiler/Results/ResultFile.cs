@@ -1,0 +1,86 @@
+using System.Buffers;
+using System.Text;
+using DesignCompiler.Diagnostics;
+using DesignCompiler.Ledger;
+using DesignCompiler.Text;
+
+namespace DesignCompiler.Results;
+
+/// <summary>A returned sheet as text, with its bytes (their hash tells a file already recorded).</summary>
+public sealed record ResultFileText(SourceText Text, byte[] Bytes);
+
+/// <summary>
+/// Reads a returned sheet. Every way the file can be wrong becomes one diagnostic with a line and
+/// column (1:1 when the file as a whole is wrong), never an exception: sheets come back from
+/// spreadsheets, phones and e-mail, and some are not what they claim to be.
+/// </summary>
+public static class ResultFile
+{
+    /// <summary>Far above any real sheet (a 10 000-plot round is under 1 MB); anything larger is the wrong file.</summary>
+    public const long MaxBytes = 64L * 1024 * 1024;
+
+    public static (ResultFileText? File, Diagnostic? Problem) Read(string path)
+    {
+        byte[] bytes;
+        try
+        {
+            if (Directory.Exists(path)) return (null, Unreadable(path, "it is a directory, not a file"));
+            var info = new FileInfo(path);
+            if (!info.Exists) return (null, Unreadable(path, "no such file"));
+            if (info.Length > MaxBytes)
+                return (null, Unreadable(path, FormattableString.Invariant($"it is {info.Length:N0} bytes; a results sheet is far smaller")));
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (UnauthorizedAccessException)
+        {
+            return (null, Unreadable(path, "permission denied"));
+        }
+        catch (IOException e)
+        {
+            return (null, Unreadable(path, e.Message));
+        }
+        return Decode(path, bytes);
+    }
+
+    public static (ResultFileText? File, Diagnostic? Problem) Decode(string path, byte[] bytes)
+    {
+        var empty = new SourceText(path, "");
+        if (bytes.Length >= 2 && (bytes[0] == 0xFF && bytes[1] == 0xFE || bytes[0] == 0xFE && bytes[1] == 0xFF))
+            return (null, At(empty, 0, LedgerDiagnostics.NotText, "it is UTF-16 text; save the sheet as 'CSV UTF-8'"));
+        if (Array.IndexOf(bytes, (byte)0) >= 0)
+            return (null, At(empty, 0, LedgerDiagnostics.NotText, "it holds binary data, not text; return the CSV sheet"));
+
+        var invalid = FirstInvalidUtf8(bytes);
+        if (invalid >= 0)
+        {
+            // Report where the bad byte is: the text before it is valid, so it can be mapped to a line and column.
+            var prefix = new SourceText(path, Encoding.UTF8.GetString(bytes, 0, invalid));
+            return (null, At(prefix, prefix.Content.Length, LedgerDiagnostics.NotText,
+                "it is not UTF-8 text from here on; save the sheet as 'CSV UTF-8'"));
+        }
+
+        var text = new SourceText(path, Encoding.UTF8.GetString(bytes));
+        if (text.Content.Trim().Length == 0)
+            return (null, At(text, 0, LedgerDiagnostics.EmptySheet, SheetColumns.Header));
+        return (new ResultFileText(text, bytes), null);
+    }
+
+    private static int FirstInvalidUtf8(byte[] bytes)
+    {
+        var span = bytes.AsSpan();
+        var offset = 0;
+        while (offset < span.Length)
+        {
+            var status = Rune.DecodeFromUtf8(span[offset..], out _, out var consumed);
+            if (status != OperationStatus.Done) return offset;
+            offset += consumed;
+        }
+        return -1;
+    }
+
+    private static Diagnostic At(SourceText text, int offset, DiagnosticDescriptor descriptor, string argument) =>
+        new(descriptor, SourceLocation.In(text, new TextSpan(offset, 0)), [argument]);
+
+    private static Diagnostic Unreadable(string path, string why) =>
+        new(LedgerDiagnostics.ResultsUnreadable, SourceLocation.File(path), [why]);
+}
