@@ -75,6 +75,7 @@ public sealed class RoundPlanner
             }
             if (newlyDropped.Any(d => d))
             {
+                KeepEnoughArmsToFillTheRound(round, state, summary, dropped, newlyDropped);
                 for (var i = 0; i < arms; i++) dropped[i] |= newlyDropped[i];
                 inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
                 summary = BestArmSummary.Of(values, inTrial);
@@ -120,6 +121,26 @@ public sealed class RoundPlanner
         if (placement.Assignments is null) return InfeasibilityReport.ForRotation(design, placement.Problem!);
         var plan = BuildPlan(state, round, posteriors, summary, shares, totals.Counts, table.Counts, placement.Assignments, dropped, newlyDropped, constraints);
         return new PlanResult(plan, null, []);
+    }
+
+    /// <summary>
+    /// A drop rule may not empty the field: when the arms left could not fill the round within
+    /// their maximums (say 'every arm &lt;= 40%' with two arms left), the arms the rule would drop
+    /// are kept, most likely to be best first, until they can. Such an arm is simply sown again.
+    /// </summary>
+    private void KeepEnoughArmsToFillTheRound(int round, TrialState state, BestArmSummary summary, bool[] dropped, bool[] newlyDropped)
+    {
+        var candidates = Enumerable.Range(0, newlyDropped.Length).Where(i => newlyDropped[i])
+            .OrderByDescending(i => summary.ProbabilityBest[i]).ThenBy(i => i).ToList();
+        foreach (var keep in candidates.Prepend(-1))
+        {
+            if (keep >= 0) newlyDropped[keep] = false;
+            var trial = dropped.Select((d, i) => d || newlyDropped[i]).ToArray();
+            var constraints = RoundConstraints.Resolve(_design, round, state.PlotsIssued, trial);
+            long room = 0;
+            for (var i = 0; i < trial.Length; i++) if (constraints.Available[i]) room += constraints.RoundMaximum[i];
+            if (room >= _design.PlotsPerRound) return;
+        }
     }
 
     private RoundPlan BuildPlan(
