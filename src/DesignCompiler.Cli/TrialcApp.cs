@@ -15,6 +15,10 @@ public static class TrialcApp
         var root = new RootCommand("trialc: compile adaptive field-trial designs into round-by-round allocation sheets.");
         root.Subcommands.Add(CheckCommand.Create(console));
         root.Subcommands.Add(CompileCommand.Create(console));
+        root.Subcommands.Add(RecordCommand.Create(console));
+        root.Subcommands.Add(StatusCommand.Create(console));
+        root.Subcommands.Add(ExportCommand.Create(console));
+        root.Subcommands.Add(VerifyCommand.Create(console));
 
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)
