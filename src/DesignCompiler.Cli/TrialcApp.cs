@@ -19,6 +19,9 @@ public static class TrialcApp
         root.Subcommands.Add(StatusCommand.Create(console));
         root.Subcommands.Add(ExportCommand.Create(console));
         root.Subcommands.Add(VerifyCommand.Create(console));
+        root.Subcommands.Add(SimulateCommand.Create(console));
+        root.Subcommands.Add(CompareCommand.Create(console));
+        root.Subcommands.Add(MergeCommand.Create(console));
 
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)

@@ -1,0 +1,135 @@
+using DesignCompiler.Binding;
+using DesignCompiler.Numerics;
+using DesignCompiler.Planning;
+using DesignCompiler.Randomness;
+
+namespace DesignCompiler.Simulation.Running;
+
+/// <summary>
+/// Runs one simulated trial through the real planner: for rounds 1..R it asks
+/// <see cref="RoundPlanner.Plan"/> for the round, stops when the planner reports a stop rule
+/// (or a round the limits cannot fill), draws an outcome for every plot the plan sows, and
+/// records them before the next round, exactly as a trial manager would. Nothing about
+/// policies, limits or placement is decided here. One runner per thread: it reuses its
+/// trial state and streams.
+/// </summary>
+public sealed class ReplicationRunner
+{
+    private readonly RoundPlanner _planner;
+    private readonly CheckedDesign _design;
+    private readonly TrialState _state;
+    private readonly Xoshiro256StarStar[] _armStreams;
+    private readonly ulong[] _armKeys;
+    private readonly int[] _inTrial;
+
+    public ReplicationRunner(RoundPlanner planner)
+    {
+        _planner = planner;
+        _design = planner.Design;
+        var arms = _design.Arms.Count;
+        _state = new TrialState(arms);
+        _armStreams = new Xoshiro256StarStar[arms];
+        _armKeys = _design.Arms.Select(a => SimulationStreams.Key(a.Code)).ToArray();
+        _inTrial = new int[arms];
+    }
+
+    public CheckedDesign Design => _design;
+
+    public ReplicationRecord NewRecord() => new(_design.Arms.Count, _design.Rounds);
+
+    public void Run(ScenarioWorld world, ulong seed, long replication, ReplicationRecord record)
+    {
+        record.Clear();
+        record.Replication = replication;
+        var arms = _design.Arms.Count;
+
+        var truth = SimulationStreams.TrueValues(seed, replication, world.Key);
+        world.Draw(ref truth, record.TrueMean, record.NoiseSd);
+        var best = double.NegativeInfinity;
+        for (var i = 0; i < arms; i++)
+        {
+            record.Value[i] = ScenarioWorld.ValueOf(_design, i, record.TrueMean[i]);
+            best = Math.Max(best, record.Value[i]);
+        }
+        record.BestValue = best;
+        for (var i = 0; i < arms; i++) _armStreams[i] = SimulationStreams.Outcomes(seed, replication, world.Key, _armKeys[i]);
+
+        _state.Reset();
+        for (var round = 1; round <= _design.Rounds; round++)
+        {
+            var result = _planner.Plan(_state, round);
+            if (result.Plan is not { } plan)
+            {
+                if (result.StopReason is not null) record.Ending = TrialEnding.Stopped;
+                else
+                {
+                    record.Ending = TrialEnding.Infeasible;
+                    record.InfeasibleMessage = result.Diagnostics.FirstOrDefault()?.Message;
+                }
+                break;
+            }
+            if (round > 1) record.LeaderAfterRound[round - 2] = LeaderOf(plan);
+            Sow(plan, round - 1, record);
+            _state.Issue(plan);
+            _state.RoundsCompleted = round;
+            record.RoundsRun = round;
+        }
+
+        FinalSelection(record);
+        // θ of a binomial outcome is the success probability of one of the plot's N trials.
+        var perTrial = _design.Outcome.Family == OutcomeFamily.Binomial ? _design.Outcome.Trials : 1;
+        for (var i = 0; i < arms; i++)
+        {
+            record.Observations[i] = _state.Statistics[i].Count;
+            record.SampleMean[i] = _state.Statistics[i].Mean / perTrial;
+        }
+    }
+
+    private void Sow(RoundPlan plan, int roundIndex, ReplicationRecord record)
+    {
+        var outcome = _design.Outcome;
+        var regret = 0.0;
+        foreach (var plot in plan.Assignments)
+        {
+            var arm = plot.Arm;
+            var y = OutcomeDraw.Draw(outcome, ref _armStreams[arm], record.TrueMean[arm], record.NoiseSd[arm]);
+            _state.Record(arm, y);
+            record.Plots[arm, roundIndex]++;
+            regret += record.BestValue - record.Value[arm];
+            if (!record.IsBest(arm)) record.NonBestPlots++;
+        }
+        record.RoundRegret[roundIndex] = regret;
+        record.PlotsSown += plan.Assignments.Count;
+    }
+
+    /// <summary>The planner's leader: highest P(best), the lowest index among ties (as <see cref="BestArmSummary.Leader"/>).</summary>
+    private static int LeaderOf(RoundPlan plan)
+    {
+        var leader = 0;
+        for (var i = 1; i < plan.Arms.Count; i++)
+            if (plan.Arms[i].ProbabilityBest > plan.Arms[leader].ProbabilityBest) leader = i;
+        return leader;
+    }
+
+    /// <summary>
+    /// The arm a trial manager would pick once the last round is recorded: the leader among the
+    /// arms still in the trial, from the same posteriors and the same P(best) computation the
+    /// planner uses. Rounds after a stop keep that selection.
+    /// </summary>
+    private void FinalSelection(ReplicationRecord record)
+    {
+        var arms = _design.Arms.Count;
+        var model = _planner.Model;
+        var values = new IMarginal[arms];
+        var count = 0;
+        for (var i = 0; i < arms; i++)
+        {
+            var arm = _design.Arms[i];
+            values[i] = new AffineMarginal(model.Posterior(arm.Prior, _state.Statistics[i]), _design.Valuation.Scale, -arm.Cost);
+            if (!_state.Dropped[i]) _inTrial[count++] = i;
+        }
+        var summary = BestArmSummary.Of(values, new ArraySegment<int>(_inTrial, 0, count));
+        summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
+        for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = summary.Leader;
+    }
+}
