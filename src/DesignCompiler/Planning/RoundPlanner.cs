@@ -75,7 +75,6 @@ public sealed class RoundPlanner
             }
             if (newlyDropped.Any(d => d))
             {
-                KeepEnoughArmsToFillTheRound(round, state, summary, dropped, newlyDropped);
                 for (var i = 0; i < arms; i++) dropped[i] |= newlyDropped[i];
                 inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
                 summary = BestArmSummary.Of(values, inTrial);
@@ -90,6 +89,13 @@ public sealed class RoundPlanner
                     return new PlanResult(null, FormattableString.Invariant(
                         $"the trial stops after round {state.RoundsCompleted}: '{rule.Criterion.Describe()}' holds for {design.Arms[leader].Code} ({value:0.####})"), []);
             }
+        }
+
+        if (dropped.Any(d => d) && KeepEnoughArmsToFillTheRound(round, state, summary, dropped))
+        {
+            for (var i = 0; i < arms; i++) newlyDropped[i] &= dropped[i];
+            inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
+            summary = BestArmSummary.Of(values, inTrial);
         }
 
         var rotation = RotationRules.For(design, round, state.History);
@@ -125,22 +131,28 @@ public sealed class RoundPlanner
 
     /// <summary>
     /// A drop rule may not empty the field: when the arms left could not fill the round within
-    /// their maximums (say 'every arm &lt;= 40%' with two arms left), the arms the rule would drop
-    /// are kept, most likely to be best first, until they can. Such an arm is simply sown again.
+    /// their maximums and stock (say 'every arm &lt;= 40%' with two arms left, or a third whose
+    /// stock ran out), dropped arms come back, smallest expected loss first, until they can.
+    /// Returns true when it brought any back.
     /// </summary>
-    private void KeepEnoughArmsToFillTheRound(int round, TrialState state, BestArmSummary summary, bool[] dropped, bool[] newlyDropped)
+    private bool KeepEnoughArmsToFillTheRound(int round, TrialState state, BestArmSummary summary, bool[] dropped)
     {
-        var candidates = Enumerable.Range(0, newlyDropped.Length).Where(i => newlyDropped[i])
-            .OrderByDescending(i => summary.ProbabilityBest[i]).ThenBy(i => i).ToList();
+        var candidates = Enumerable.Range(0, dropped.Length).Where(i => dropped[i])
+            .OrderBy(i => summary.ExpectedLoss[i]).ThenBy(i => i).ToList();
+        var restored = false;
         foreach (var keep in candidates.Prepend(-1))
         {
-            if (keep >= 0) newlyDropped[keep] = false;
-            var trial = dropped.Select((d, i) => d || newlyDropped[i]).ToArray();
-            var constraints = RoundConstraints.Resolve(_design, round, state.PlotsIssued, trial);
+            if (keep >= 0)
+            {
+                dropped[keep] = false;
+                restored = true;
+            }
+            var constraints = RoundConstraints.Resolve(_design, round, state.PlotsIssued, dropped);
             long room = 0;
-            for (var i = 0; i < trial.Length; i++) if (constraints.Available[i]) room += constraints.RoundMaximum[i];
-            if (room >= _design.PlotsPerRound) return;
+            for (var i = 0; i < dropped.Length; i++) if (constraints.Available[i]) room += constraints.RoundMaximum[i];
+            if (room >= _design.PlotsPerRound) return restored;
         }
+        return restored;
     }
 
     private RoundPlan BuildPlan(

@@ -37,7 +37,8 @@ public sealed class TrialState
         foreach (var arm in plan.Arms)
         {
             PlotsIssued[arm.Index] += arm.Plots;
-            if (arm.Status == ArmStatus.Dropped) Dropped[arm.Index] = true;
+            // An arm a drop rule removed may come back when the round could not be sown without it.
+            Dropped[arm.Index] = arm.Status == ArmStatus.Dropped;
         }
         History.Add(plan.Assignments.Select(a => a.Arm).ToArray());
     }
