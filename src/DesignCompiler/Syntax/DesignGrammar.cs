@@ -324,23 +324,21 @@ internal static class DesignGrammar
     private static readonly Parser<NumberSyntax?> AfterRound =
         Keyword("after").Then(_ => Keyword("round")).Then(_ => Number).Optional().Select(o => o.GetOrDefault());
 
-    internal static readonly Parser<StatementSyntax> StopStatement =
+    /// <summary>'stop when …' and 'drop when …' share their shape: keyword, 'when', criterion, optional 'after round R'.</summary>
+    private static Parser<StatementSyntax> DecisionRule(string keyword, Func<CriterionSyntax, NumberSyntax?, TextSpan, StatementSyntax> make) =>
         Node(
-            from keyword in Keyword("stop")
+            from word in Keyword(keyword)
             from whenWord in Keyword("when")
             from criterion in Criterion
             from after in AfterRound
             select (criterion, after),
-            (v, s) => new StopStatementSyntax(v.criterion, v.after, s));
+            (v, s) => make(v.criterion, v.after, s));
+
+    internal static readonly Parser<StatementSyntax> StopStatement =
+        DecisionRule("stop", (criterion, after, span) => new StopStatementSyntax(criterion, after, span));
 
     internal static readonly Parser<StatementSyntax> DropStatement =
-        Node(
-            from keyword in Keyword("drop")
-            from whenWord in Keyword("when")
-            from criterion in Criterion
-            from after in AfterRound
-            select (criterion, after),
-            (v, s) => new DropStatementSyntax(v.criterion, v.after, s));
+        DecisionRule("drop", (criterion, after, span) => new DropStatementSyntax(criterion, after, span));
 
     // --- scenarios ------------------------------------------------------------------
     private static Parser<T> Spaced<T>(Parser<T> parser) => from value in parser from space in AnySpace select value;
