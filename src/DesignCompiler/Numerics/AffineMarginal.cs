@@ -6,7 +6,7 @@ namespace DesignCompiler.Numerics;
 /// The distribution of u = scale·x + shift for x from another marginal. A negative scale turns a
 /// "smaller is better" goal into a maximisation, and price·θ − cost ranks arms by net value.
 /// </summary>
-public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IEquatable<AffineMarginal>
+public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProfile, IEquatable<AffineMarginal>
 {
     public AffineMarginal(IMarginal inner, double scale, double shift)
     {
@@ -46,11 +46,15 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IEquatable<A
     double IQuadratureProfile.UpperQuantile(double q) =>
         Scale > 0 ? Map(MarginalProfile.UpperQuantile(Inner, q)) : Map(Inner.Quantile(q));
 
-    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
-        MarginalProfile.Support(Inner, tailMass, out double innerLo, out double innerHi);
+        MarginalProfile.Support(Inner, tailMass, out double innerLo, out double innerHi, out double innerAbove, out double innerBelow);
+        double size = Math.Abs(Scale);
         lo = Scale > 0 ? Map(innerLo) : Map(innerHi);
         hi = Scale > 0 ? Map(innerHi) : Map(innerLo);
+        // A negative scale turns the inner variable's upper bound into this one's lower bound and back.
+        aboveLowerBound = size * (Scale > 0 ? innerAbove : innerBelow);
+        belowUpperBound = size * (Scale > 0 ? innerBelow : innerAbove);
     }
 
     double IQuadratureProfile.PanelWidth(double u, bool forward) =>
@@ -59,10 +63,18 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IEquatable<A
     void IQuadratureProfile.Evaluate(double u, out double density, out double cdf, out double upperTail)
     {
         MarginalProfile.Evaluate(Inner, Unmap(u), out double innerDensity, out double innerCdf, out double innerUpper);
-        density = innerDensity / Math.Abs(Scale);
-        cdf = Scale > 0 ? innerCdf : innerUpper;
-        upperTail = Scale > 0 ? innerUpper : innerCdf;
+        Orient(innerDensity, innerCdf, innerUpper, out density, out cdf, out upperTail);
     }
+
+    void IBoundedProfile.EvaluateNearBound(bool upper, double distance, out double density, out double cdf, out double upperTail)
+    {
+        MarginalProfile.EvaluateNearBound(
+            Inner, upper == Scale > 0, distance / Math.Abs(Scale), out double innerDensity, out double innerCdf, out double innerUpper);
+        Orient(innerDensity, innerCdf, innerUpper, out density, out cdf, out upperTail);
+    }
+
+    double IBoundedProfile.PanelWidthNearBound(bool upper, double distance, bool awayFromBound) =>
+        Math.Abs(Scale) * MarginalProfile.PanelWidthNearBound(Inner, upper == Scale > 0, distance / Math.Abs(Scale), awayFromBound);
 
     public bool Equals(AffineMarginal? other) =>
         other is not null && Scale.Equals(other.Scale) && Shift.Equals(other.Shift) && Inner.Equals(other.Inner);
@@ -73,6 +85,13 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IEquatable<A
 
     public override string ToString() =>
         string.Create(CultureInfo.InvariantCulture, $"{Scale:R}·{Inner} + {Shift:R}");
+
+    private void Orient(double innerDensity, double innerCdf, double innerUpper, out double density, out double cdf, out double upperTail)
+    {
+        density = innerDensity / Math.Abs(Scale);
+        cdf = Scale > 0 ? innerCdf : innerUpper;
+        upperTail = Scale > 0 ? innerUpper : innerCdf;
+    }
 
     private double Map(double x) => Scale * x + Shift;
 

@@ -15,9 +15,16 @@ internal readonly struct BetaKernel
 {
     private readonly bool centred;
     private readonly double mean, meanComplement, roundingGap, linearSlope, logConstant, switchPoint;
+    private readonly double[]? lowerTable, upperTable;
 
-    public BetaKernel(double a, double b)
+    /// <param name="tabulate">precompute the continued-fraction coefficients, worth it when the kernel is evaluated many times.</param>
+    public BetaKernel(double a, double b, bool tabulate = false)
     {
+        if (tabulate)
+        {
+            lowerTable = BetaContinuedFraction.Tabulate(a, b);
+            upperTable = BetaContinuedFraction.Tabulate(b, a);
+        }
         A = a;
         B = b;
         switchPoint = (a + 1.0) / (a + b + 2.0);
@@ -36,8 +43,6 @@ internal readonly struct BetaKernel
         }
         else
         {
-            mean = a / (a + b);
-            meanComplement = b / (a + b);
             logConstant = -SpecialFunctions.LogBeta(a, b);
         }
     }
@@ -45,8 +50,6 @@ internal readonly struct BetaKernel
     public double A { get; }
 
     public double B { get; }
-
-    public double Mean => mean;
 
     public BetaKernel Swapped => new(B, A);
 
@@ -96,16 +99,34 @@ internal readonly struct BetaKernel
     private void TailsFromLogPrefactor(double x, double y, double logPrefactor, out double lower, out double upper)
     {
         double prefactor = Math.Exp(logPrefactor);
-        if (x < switchPoint)
+        if (UseLowerFraction(x, y))
         {
-            lower = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(A, B, x) / A);
+            lower = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(A, B, x, lowerTable) / A);
             upper = 1.0 - lower;
         }
         else
         {
-            upper = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(B, A, y) / B);
+            upper = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(B, A, y, upperTable) / B);
             lower = 1.0 - upper;
         }
+    }
+
+    // The fraction in x converges for x below the switch point, the one in y above it. With an argument
+    // close to 1 a fraction loses about max(a,b)·1e-16 to rounding (this happens when one parameter is
+    // huge and the other small), so if the other fraction's argument is tiny and it is only just past its
+    // own switch point (where it still converges reliably, within about 1/(2√(p+1)) of it in ratio),
+    // that one is used instead.
+    private bool UseLowerFraction(double x, double y)
+    {
+        const double nearOne = 0.01;
+        if (x < switchPoint)
+        {
+            if (y >= nearOne) return true;
+            double otherSwitch = 1.0 - switchPoint;
+            return !(y <= otherSwitch * (1.0 + 0.5 / Math.Sqrt(B + 1.0)));
+        }
+        if (x >= nearOne) return false;
+        return x <= switchPoint * (1.0 + 0.5 / Math.Sqrt(A + 1.0));
     }
 
     // ln u where u + v = 1: the logarithm of whichever is smaller is taken directly, the other via log1p.

@@ -3,7 +3,7 @@ using System.Globalization;
 namespace DesignCompiler.Numerics;
 
 /// <summary>Beta(a, b), the posterior of a success rate.</summary>
-public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IEquatable<BetaMarginal>
+public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfile, IEquatable<BetaMarginal>
 {
     private readonly BetaKernel kernel;
 
@@ -12,7 +12,7 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IEquatable<Bet
         if (!IncompleteBeta.ValidParameters(a, b)) throw new ArgumentOutOfRangeException(nameof(a), "Beta parameters must be positive and finite.");
         A = a;
         B = b;
-        kernel = new BetaKernel(a, b);
+        kernel = new BetaKernel(a, b, tabulate: true);
         double s = a + b;
         Mean = a / s;
         StdDev = Math.Sqrt(Mean * (b / s) / (s + 1.0));
@@ -69,27 +69,42 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IEquatable<Bet
         return x;
     }
 
-    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
         const double coarse = 1e-3;
         IncompleteBeta.Quantile(kernel, tailMass, 1.0 - tailMass, coarse, out lo, out _);
-        IncompleteBeta.Quantile(kernel, 1.0 - tailMass, tailMass, coarse, out hi, out _);
-        // A quantile that rounds onto an end of [0,1] would leave no room for the geometric panels
-        // that resolve the singular density there; the mass beyond is added by the caller's tail term.
+        IncompleteBeta.Quantile(kernel, 1.0 - tailMass, tailMass, coarse, out hi, out belowUpperBound);
+        // Panels graded towards a singular end need a positive start; below 1e-300 no mass is left that the
+        // other arms could let count.
         lo = Math.Max(lo, 1e-300);
-        hi = Math.Min(hi, Math.BitDecrement(1.0));
+        aboveLowerBound = lo;
+        belowUpperBound = Math.Max(belowUpperBound, 1e-300);
     }
 
-    double IQuadratureProfile.PanelWidth(double x, bool forward)
-    {
-        double w = PanelRules.StdDevMultiple * StdDev;
-        if (!PanelRules.IsInteger(A)) w = Math.Min(w, PanelRules.NearBranchPoint(x, awayFromIt: forward));
-        if (!PanelRules.IsInteger(B)) w = Math.Min(w, PanelRules.NearBranchPoint(1.0 - x, awayFromIt: !forward));
-        return w;
-    }
+    double IQuadratureProfile.PanelWidth(double x, bool forward) => PanelWidthAt(x, 1.0 - x, forward);
 
     void IQuadratureProfile.Evaluate(double x, out double density, out double cdf, out double upperTail) =>
         kernel.Evaluate(x, 1.0 - x, out density, out cdf, out upperTail);
+
+    void IBoundedProfile.EvaluateNearBound(bool upper, double distance, out double density, out double cdf, out double upperTail)
+    {
+        if (upper) kernel.Evaluate(1.0 - distance, distance, out density, out cdf, out upperTail);
+        else kernel.Evaluate(distance, 1.0 - distance, out density, out cdf, out upperTail);
+    }
+
+    double IBoundedProfile.PanelWidthNearBound(bool upper, double distance, bool awayFromBound) =>
+        upper
+            ? PanelWidthAt(1.0 - distance, distance, forward: !awayFromBound)
+            : PanelWidthAt(distance, 1.0 - distance, forward: awayFromBound);
+
+    // x^(a−1) has a branch point at 0 unless a is an integer, and (1−x)^(b−1) one at 1 unless b is.
+    private double PanelWidthAt(double x, double y, bool forward)
+    {
+        double w = PanelRules.StdDevMultiple * StdDev;
+        if (!PanelRules.IsInteger(A)) w = Math.Min(w, PanelRules.NearBranchPoint(x, awayFromIt: forward));
+        if (!PanelRules.IsInteger(B)) w = Math.Min(w, PanelRules.NearBranchPoint(y, awayFromIt: !forward));
+        return w;
+    }
 
     public bool Equals(BetaMarginal? other) => other is not null && A.Equals(other.A) && B.Equals(other.B);
 

@@ -67,11 +67,13 @@ public sealed class GammaMarginal : IMarginal, IQuadratureProfile, IEquatable<Ga
         return IncompleteGamma.Quantile(kernel, 1.0 - q, q, IncompleteBeta.FullPrecision) / Rate;
     }
 
-    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
         const double coarse = 1e-3;
         lo = Math.Max(IncompleteGamma.Quantile(kernel, tailMass, 1.0 - tailMass, coarse) / Rate, 1e-300);
         hi = IncompleteGamma.Quantile(kernel, 1.0 - tailMass, tailMass, coarse) / Rate;
+        aboveLowerBound = lo;
+        belowUpperBound = double.PositiveInfinity;
     }
 
     double IQuadratureProfile.PanelWidth(double x, bool forward)

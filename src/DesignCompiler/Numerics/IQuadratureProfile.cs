@@ -10,8 +10,12 @@ internal interface IQuadratureProfile
     /// <summary>The x with UpperTail(x) = q, accurate for tiny q (Quantile(1 − q) would round q away).</summary>
     double UpperQuantile(double q);
 
-    /// <summary>Points beyond which each tail holds about <paramref name="tailMass"/>; a few per cent off is fine.</summary>
-    void Support(double tailMass, out double lo, out double hi);
+    /// <summary>
+    /// Points beyond which each tail holds about <paramref name="tailMass"/>; a few per cent off is fine.
+    /// The distances lo − LowerBound and UpperBound − hi are also given, exact even where lo or hi
+    /// themselves round onto the bound (+∞ for an infinite bound).
+    /// </summary>
+    void Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound);
 
     /// <summary>
     /// The widest panel on which a 20-point Gauss–Legendre rule resolves this density: [x, x + w] when
@@ -20,4 +24,17 @@ internal interface IQuadratureProfile
     double PanelWidth(double x, bool forward);
 
     void Evaluate(double x, out double density, out double cdf, out double upperTail);
+}
+
+/// <summary>
+/// A marginal with a finite bound that can be evaluated at a given distance from it without rounding that
+/// distance. Next to the bound of [0, 1], x = 1 − d cannot hold d &lt; 1e-16, yet a density like (1−x)^(−½)
+/// keeps a mass of order 1e-8 there; likewise 0.2 + d for a shifted density singular at 0.2.
+/// </summary>
+internal interface IBoundedProfile
+{
+    void EvaluateNearBound(bool upper, double distance, out double density, out double cdf, out double upperTail);
+
+    /// <summary>Panel width at <paramref name="distance"/> from the bound, for a panel moving away from it or towards it.</summary>
+    double PanelWidthNearBound(bool upper, double distance, bool awayFromBound);
 }

@@ -13,14 +13,6 @@ public static partial class IncompleteBeta
         return x;
     }
 
-    /// <summary>The x with 1 − I_x(a,b) = q, accurate for tiny q.</summary>
-    internal static double InverseComplement(double a, double b, double q)
-    {
-        if (!ValidParameters(a, b) || double.IsNaN(q) || q < 0 || q > 1) return double.NaN;
-        Quantile(new BetaKernel(a, b), 1.0 - q, q, FullPrecision, out double x, out _);
-        return x;
-    }
-
     /// <summary>
     /// The quantile as the pair (x, 1 − x), each accurate in relative terms. The solve runs in whichever
     /// of x and 1 − x is below ½ at the answer, so quantiles crowding against 1 keep their digits too.
@@ -47,13 +39,13 @@ public static partial class IncompleteBeta
         }
     }
 
-    private static double SolveLower(in BetaKernel kernel, double p, double q, double guess, double relativeTolerance)
-    {
-        return TailInversion.Solve(new BetaTails(kernel), p, q, guess, 1.0, relativeTolerance);
-    }
+    private static double SolveLower(in BetaKernel kernel, double p, double q, double guess, double relativeTolerance) =>
+        TailInversion.Solve(new BetaTails(kernel), p, q, guess, 1.0, relativeTolerance);
 
     // Starting values from the normal approximation with a Cornish–Fisher-type correction when a, b ≥ 1,
-    // and from the leading power laws at either end otherwise (after Numerical Recipes §6.14).
+    // and from the leading power laws at either end otherwise (after the starting values of invbetai in
+    // Press et al., Numerical Recipes, 3rd ed.; the section number is from memory). Only the start
+    // matters here: the Newton iteration fixes its accuracy.
     private static double InitialGuess(double a, double b, double p, double q)
     {
         if (a >= 1 && b >= 1)

@@ -28,13 +28,6 @@ public static class IncompleteGamma
         return Quantile(new GammaKernel(a), p, 1.0 - p, IncompleteBeta.FullPrecision);
     }
 
-    /// <summary>The x with Q(a,x) = q, accurate for tiny q.</summary>
-    internal static double InverseUpper(double a, double q)
-    {
-        if (!ValidShape(a) || double.IsNaN(q) || q < 0 || q > 1) return double.NaN;
-        return Quantile(new GammaKernel(a), 1.0 - q, q, IncompleteBeta.FullPrecision);
-    }
-
     internal static double Quantile(in GammaKernel kernel, double p, double q, double relativeTolerance)
     {
         if (p <= 0) return 0;
@@ -45,8 +38,9 @@ public static class IncompleteGamma
 
     internal static bool ValidShape(double a) => a > 0 && !double.IsPositiveInfinity(a);
 
-    // Wilson–Hilferty for a > 1; otherwise the leading power law near 0 or the exponential tail
-    // (after Numerical Recipes §6.2.1).
+    // Wilson–Hilferty for a > 1; otherwise the leading power law near 0 or the exponential tail (after the
+    // starting values of invgammp in Press et al., Numerical Recipes, 3rd ed.; from memory). Newton fixes
+    // the accuracy.
     private static double InitialGuess(double a, double p, double q)
     {
         if (a > 1)

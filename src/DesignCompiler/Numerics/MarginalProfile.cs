@@ -2,22 +2,26 @@ namespace DesignCompiler.Numerics;
 
 /// <summary>
 /// The quadrature's view of any <see cref="IMarginal"/>: the built-in marginals answer through
-/// <see cref="IQuadratureProfile"/>; any other implementation gets generic answers from its public members.
+/// <see cref="IQuadratureProfile"/> and <see cref="IBoundedProfile"/>; any other implementation gets generic
+/// answers from its public members.
 /// </summary>
 internal static class MarginalProfile
 {
     internal static double UpperQuantile(IMarginal m, double q) =>
         m is IQuadratureProfile p ? p.UpperQuantile(q) : m.Quantile(1.0 - q);
 
-    internal static void Support(IMarginal m, double tailMass, out double lo, out double hi)
+    internal static void Support(
+        IMarginal m, double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
         if (m is IQuadratureProfile p)
         {
-            p.Support(tailMass, out lo, out hi);
+            p.Support(tailMass, out lo, out hi, out aboveLowerBound, out belowUpperBound);
             return;
         }
         lo = Finite(m.Quantile(tailMass), m.LowerBound, m, -1);
         hi = Finite(m.Quantile(1.0 - tailMass), m.UpperBound, m, +1);
+        aboveLowerBound = lo - m.LowerBound;
+        belowUpperBound = m.UpperBound - hi;
     }
 
     internal static double PanelWidth(IMarginal m, double x, bool forward)
@@ -41,6 +45,18 @@ internal static class MarginalProfile
         cdf = m.Cdf(x);
         upperTail = m.UpperTail(x);
     }
+
+    internal static void EvaluateNearBound(
+        IMarginal m, bool upper, double distance, out double density, out double cdf, out double upperTail)
+    {
+        if (m is IBoundedProfile p) p.EvaluateNearBound(upper, distance, out density, out cdf, out upperTail);
+        else Evaluate(m, upper ? m.UpperBound - distance : m.LowerBound + distance, out density, out cdf, out upperTail);
+    }
+
+    internal static double PanelWidthNearBound(IMarginal m, bool upper, double distance, bool awayFromBound) =>
+        m is IBoundedProfile p
+            ? p.PanelWidthNearBound(upper, distance, awayFromBound)
+            : PanelWidth(m, upper ? m.UpperBound - distance : m.LowerBound + distance, forward: upper != awayFromBound);
 
     private static double Finite(double quantile, double bound, IMarginal m, int side)
     {

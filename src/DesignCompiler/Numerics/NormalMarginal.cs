@@ -33,11 +33,13 @@ public sealed class NormalMarginal : IMarginal, IQuadratureProfile, IEquatable<N
 
     double IQuadratureProfile.UpperQuantile(double q) => Mean + StdDev * StandardNormal.UpperQuantile(q);
 
-    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
         double z = StandardNormal.UpperQuantile(tailMass);
         lo = Mean - z * StdDev;
         hi = Mean + z * StdDev;
+        aboveLowerBound = double.PositiveInfinity;
+        belowUpperBound = double.PositiveInfinity;
     }
 
     double IQuadratureProfile.PanelWidth(double x, bool forward) => PanelRules.StdDevMultiple * StdDev;

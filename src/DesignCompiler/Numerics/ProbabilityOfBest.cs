@@ -8,6 +8,13 @@ namespace DesignCompiler.Numerics;
 /// deterministic adaptive Gauss–Legendre quadrature (never Monte Carlo). Identical arms get identical
 /// probabilities; arms that cannot be best within 1e-16 get exactly 0.
 /// </summary>
+/// <remarks>
+/// The probabilities are renormalised to sum to 1; the returned error bound adds the quadrature's own
+/// panel-by-panel estimate, that renormalisation and the tails cut off at 1e-16 per arm. It is an estimate of
+/// the absolute error of each probability, typically 1e-14 and below 1e-12 in all the cases tested.
+/// E[max] is that of the maximum clamped to where all arms but 1e-16 of their mass lie: exact to that level
+/// for light tails, and the only finite answer for a Cauchy arm, whose mean does not exist.
+/// </remarks>
 public static class ProbabilityOfBest
 {
     // Up to this many arms the working memory lives on the stack.
@@ -58,12 +65,8 @@ public static class ProbabilityOfBest
         int doubles = BestArmQuadrature.DoublesNeeded(k), ints = BestArmQuadrature.IntsNeeded(k);
         double[]? rentedDoubles = null;
         int[]? rentedInts = null;
-        Span<double> doubleSpace = k <= StackArms
-            ? stackalloc double[BestArmQuadrature.DoublesNeeded(StackArms)]
-            : (rentedDoubles = ArrayPool<double>.Shared.Rent(doubles));
-        Span<int> intSpace = k <= StackArms
-            ? stackalloc int[BestArmQuadrature.IntsNeeded(StackArms)]
-            : (rentedInts = ArrayPool<int>.Shared.Rent(ints));
+        Span<double> doubleSpace = k <= StackArms ? stackalloc double[doubles] : (rentedDoubles = ArrayPool<double>.Shared.Rent(doubles));
+        Span<int> intSpace = k <= StackArms ? stackalloc int[ints] : (rentedInts = ArrayPool<int>.Shared.Rent(ints));
         try
         {
             var quadrature = new BestArmQuadrature(arms, doubleSpace[..doubles], intSpace[..ints], settings);

@@ -8,5 +8,5 @@ namespace DesignCompiler.Numerics;
 /// <param name="PanelTolerance">a panel is bisected while its derivative check misses by more than this.</param>
 internal readonly record struct QuadratureSettings(double WidthScale, double PanelTolerance)
 {
-    internal static QuadratureSettings Default => new(1.0, 1e-14);
+    internal static QuadratureSettings Default => new(1.0, 1e-13);
 }

@@ -32,17 +32,25 @@ public static partial class SpecialFunctions
         if (double.IsNaN(x)) return x;
         if (x <= -1.0) return x == -1.0 ? double.NegativeInfinity : double.NaN;
         if (Math.Abs(x) > 0.5) return Log1p(x) - x;
-        // ln(1+x) = 2 atanh(u) with u = x/(2+x); the linear part 2u − x equals −x·u exactly.
-        double u = x / (2.0 + x), u2 = u * u;
-        double power = u * u2, sum = 0.0;
-        for (int k = 3; k < 200; k += 2)
+        // ln(1+x) = 2 atanh(u) with u = x/(2+x); the linear part 2u − x equals −x·u exactly, and the rest is
+        // 2u³ Σ_k u^(2k)/(2k+3), summed by Horner to a degree that suits |u| ≤ 1/3.
+        double u = x / (2.0 + x), v = u * u;
+        double series;
+        if (v < 4e-4)
         {
-            double term = power / k;
-            sum += term;
-            if (Math.Abs(term) <= 1e-17 * Math.Abs(sum)) break;
-            power *= u2;
+            series = 1.0 / 3 + v * (1.0 / 5 + v * (1.0 / 7 + v * (1.0 / 9 + v * (1.0 / 11 + v * (1.0 / 13)))));
         }
-        return -x * u + 2.0 * sum;
+        else if (v < 0.0121)
+        {
+            series = 1.0 / 3 + v * (1.0 / 5 + v * (1.0 / 7 + v * (1.0 / 9 + v * (1.0 / 11 + v * (1.0 / 13
+                + v * (1.0 / 15 + v * (1.0 / 17 + v * (1.0 / 19 + v * (1.0 / 21 + v * (1.0 / 23))))))))));
+        }
+        else
+        {
+            series = 0.0;
+            for (int k = 43; k >= 3; k -= 2) series = series * v + 1.0 / k;
+        }
+        return -x * u + 2.0 * u * v * series;
     }
 
     /// <summary>e^(−z²/2) with z² carried in two parts, so the tail keeps relative accuracy out to z ≈ 38.</summary>

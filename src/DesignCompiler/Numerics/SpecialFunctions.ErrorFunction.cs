@@ -10,7 +10,7 @@ public static partial class SpecialFunctions
     {
         if (double.IsNaN(x)) return x;
         if (x < 0) return -Erf(-x);
-        if (x * x < 2.0) return TwoOverSqrtPi * ExpMinusSquare(x) * x * OddDoubleFactorialSeries(2.0 * x * x);
+        if (x * x < 1.5) return TwoOverSqrtPi * ExpMinusSquare(x) * x * OddDoubleFactorialSeries(2.0 * x * x);
         return 1.0 - Erfc(x);
     }
 
@@ -20,9 +20,9 @@ public static partial class SpecialFunctions
         if (double.IsNaN(x)) return x;
         if (x < 0) return 2.0 - Erfc(-x);
         double s = x * x;
-        if (s < 2.0) return 1.0 - TwoOverSqrtPi * ExpMinusSquare(x) * x * OddDoubleFactorialSeries(2.0 * s);
+        if (s < 1.5) return 1.0 - TwoOverSqrtPi * ExpMinusSquare(x) * x * OddDoubleFactorialSeries(2.0 * s);
         if (double.IsInfinity(s)) return 0.0;
-        // erfc(x) = Q(½, x²) (DLMF 7.11.2 with 8.4.14); the continued fraction converges fast once x² ≥ 2.
+        // erfc(x) = Q(½, x²) (DLMF 7.11.2 with 8.4.14); the continued fraction converges well once x² ≥ 1.5.
         return ExpMinusSquare(x) * x * OneOverSqrtPi * HalfGammaContinuedFraction(s);
     }
 

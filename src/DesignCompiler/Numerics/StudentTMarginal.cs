@@ -19,7 +19,7 @@ public sealed class StudentTMarginal : IMarginal, IQuadratureProfile, IEquatable
         Df = df;
         Location = location;
         Scale = scale;
-        kernel = new BetaKernel(0.5 * df, 0.5);
+        kernel = new BetaKernel(0.5 * df, 0.5, tabulate: true);
         // 1 / (√df · B(df/2, ½)) · 1/scale
         logNormaliser = -SpecialFunctions.LogBeta(0.5 * df, 0.5) - 0.5 * Math.Log(df) - Math.Log(scale);
         StdDev = df > 2 ? scale * Math.Sqrt(df / (df - 2.0)) : double.PositiveInfinity;
@@ -75,11 +75,13 @@ public sealed class StudentTMarginal : IMarginal, IQuadratureProfile, IEquatable
         return Location + Scale * t;
     }
 
-    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi)
+    void IQuadratureProfile.Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
         double t = StudentT.UpperHalfQuantile(Df, tailMass, 1e-3);
         lo = Location - Scale * t;
         hi = Location + Scale * t;
+        aboveLowerBound = double.PositiveInfinity;
+        belowUpperBound = double.PositiveInfinity;
     }
 
     // The density has poles at z = ±i√df. Panels keep their distance to them in proportion (so they grow

@@ -1,0 +1,123 @@
+namespace DesignCompiler.Numerics;
+
+/// <summary>One panel: the shared Gauss–Legendre nodes, the derivative check and its bisection.</summary>
+internal ref partial struct BestArmQuadrature
+{
+    private void IntegratePanel(double t0, double g0, double t1, double g1, int depth, double parentDefect = double.PositiveInfinity)
+    {
+        double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
+        for (int s = first; s < slots; s++) panelSum[s] = 0;
+        double derivativeSum = 0, momentSum = 0;
+        var abscissas = GaussLegendre20.Abscissas.AsSpan();
+        var weights = GaussLegendre20.Weights.AsSpan();
+        for (int n = 0; n < abscissas.Length; n++)
+        {
+            double w = half * weights[n], offset = half * abscissas[n];
+            double left = centre - offset, right = centre + offset;
+            double atLeft = AccumulateNode(left, w), atRight = AccumulateNode(right, w);
+            derivativeSum += w * (atLeft + atRight);
+            momentSum += w * (Position(left) * atLeft + Position(right) * atRight);
+        }
+        // Below an upper bound G decreases with t, so the panel integral is G(t0) − G(t1) there.
+        double expected = coordinate == Coordinate.BelowUpperBound ? g0 - g1 : g1 - g0;
+        double defect = Math.Abs(derivativeSum - expected);
+        // Each CDF carries a rounding error of an ulp or two, so G does too, K-fold; asking for more than
+        // that would only bisect rounding noise.
+        double noise = 16.0 * RoundingUnit * (slots - first) * Math.Max(g0, g1);
+        bool resolved = defect <= Math.Max(settings.PanelTolerance, noise);
+        // A quadrature error shrinks by orders of magnitude when the panel is halved; a defect that does not
+        // is the arms' own rounding (a CDF a few ulps off its density), which bisection cannot remove.
+        bool improving = defect < 0.25 * parentDefect;
+        bool splittable = depth < MaxDepth && t0 < centre && centre < t1 && splits < MaxSplits;
+        if (!resolved && improving && splittable)
+        {
+            splits++;
+            double gm = EvaluateProduct(centre, store: false);
+            IntegratePanel(t0, g0, centre, gm, depth + 1, defect);
+            IntegratePanel(centre, gm, t1, g1, depth + 1, defect);
+            return;
+        }
+        for (int s = first; s < slots; s++) total[s] += panelSum[s];
+        expectedMaximumSum += momentSum;
+        defectSum += defect;
+    }
+
+    /// <summary>
+    /// Adds w · f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) to each live slot's panel sum and returns the node's
+    /// Σ_s m_s f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) = G′.
+    /// </summary>
+    private readonly double AccumulateNode(double node, double w)
+    {
+        for (int s = first; s < slots; s++)
+        {
+            EvaluateArm(s, node, out density[s], out cdf[s], out _);
+            int m = slotMultiplicity[s];
+            power[s] = m == 1 ? cdf[s] : Math.Pow(cdf[s], m);
+        }
+        suffix[slots] = 1.0;
+        for (int s = slots - 1; s >= first; s--) suffix[s] = suffix[s + 1] * power[s];
+        double prefix = 1.0, derivative = 0.0;
+        for (int s = first; s < slots; s++)
+        {
+            int m = slotMultiplicity[s];
+            double own = m == 1 ? 1.0 : Math.Pow(cdf[s], m - 1);
+            double integrand = density[s] * own * prefix * suffix[s + 1];
+            panelSum[s] += w * integrand;
+            derivative += m * integrand;
+            prefix *= power[s];
+        }
+        return derivative;
+    }
+
+    /// <summary>G = ∏ F_s^(m_s) over the live slots at a node; optionally kept as the start of the next panel.</summary>
+    private readonly double EvaluateProduct(double node, bool store)
+    {
+        double product = 1.0;
+        for (int s = first; s < slots; s++)
+        {
+            EvaluateArm(s, node, out _, out double f, out double upper);
+            int m = slotMultiplicity[s];
+            double p = m == 1 ? f : Math.Pow(f, m);
+            product *= p;
+            if (store)
+            {
+                endPower[s] = p;
+                endCdf[s] = f;
+                endUpper[s] = upper;
+            }
+        }
+        return product;
+    }
+
+    // An arm whose own bound is the origin is evaluated at the exact distance; any other at its position.
+    private readonly void EvaluateArm(int slot, double t, out double f, out double cdfValue, out double upper)
+    {
+        IMarginal arm = arms[slotArm[slot]];
+        switch (coordinate)
+        {
+            case Coordinate.AboveLowerBound when arm.LowerBound == origin:
+                MarginalProfile.EvaluateNearBound(arm, upper: false, t, out f, out cdfValue, out upper);
+                break;
+            case Coordinate.BelowUpperBound when arm.UpperBound == origin:
+                MarginalProfile.EvaluateNearBound(arm, upper: true, t, out f, out cdfValue, out upper);
+                break;
+            default:
+                MarginalProfile.Evaluate(arm, Position(t), out f, out cdfValue, out upper);
+                break;
+        }
+    }
+
+    private readonly double PanelWidth(int slot, double t)
+    {
+        IMarginal arm = arms[slotArm[slot]];
+        return coordinate switch
+        {
+            Coordinate.AboveLowerBound when arm.LowerBound == origin =>
+                MarginalProfile.PanelWidthNearBound(arm, upper: false, t, awayFromBound: true),
+            Coordinate.BelowUpperBound when arm.UpperBound == origin =>
+                MarginalProfile.PanelWidthNearBound(arm, upper: true, t, awayFromBound: true),
+            Coordinate.BelowUpperBound => MarginalProfile.PanelWidth(arm, Position(t), forward: false),
+            _ => MarginalProfile.PanelWidth(arm, Position(t), forward: true),
+        };
+    }
+}
