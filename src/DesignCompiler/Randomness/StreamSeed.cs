@@ -30,7 +30,7 @@ namespace DesignCompiler.Randomness;
 /// (omitted ones are 0), so the formula never depends on how many arguments a caller wrote.
 /// Each step is a bijection of its component for a fixed prefix, so two derivations that share
 /// every earlier component but differ in one later component never collide.
-/// A Python transcription lives in tests/DesignCompiler.Tests/Randomness/reference/rng_reference.py.
+/// A Python version for checking lives in tests/DesignCompiler.Tests/Randomness/reference/rng_reference.py.
 /// </para>
 /// </remarks>
 public static class StreamSeed

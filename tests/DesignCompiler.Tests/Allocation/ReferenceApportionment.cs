@@ -1,7 +1,7 @@
 namespace DesignCompiler.Tests.Allocation;
 
 /// <summary>
-/// Slow, obviously-correct transcriptions of the documented rules, for the property tests to
+/// Slow, obviously correct versions of the documented rules, for the property tests to
 /// compare the fast library code with.
 /// </summary>
 internal static class ReferenceApportionment

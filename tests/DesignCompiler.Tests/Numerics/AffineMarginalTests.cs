@@ -16,12 +16,12 @@ public class AffineMarginalTests
         var viaReflection = ProbabilityOfBest.Compute(reflected);
         for (int i = 0; i < counts.Length; i++)
         {
-            Close.Absolute(viaReflection.Probabilities[i], viaAffine.Probabilities[i], 1e-13, $"arm {i}");
+            NumericAssert.Absolute(viaReflection.Probabilities[i], viaAffine.Probabilities[i], 1e-13, $"arm {i}");
         }
         // Expected loss is in the units of the ranked value; here −x against 1 − x differ by a shift only.
         for (int i = 0; i < counts.Length; i++)
         {
-            Close.Absolute(viaReflection.ExpectedLoss[i], viaAffine.ExpectedLoss[i], 1e-13, $"loss {i}");
+            NumericAssert.Absolute(viaReflection.ExpectedLoss[i], viaAffine.ExpectedLoss[i], 1e-13, $"loss {i}");
         }
     }
 
@@ -33,8 +33,8 @@ public class AffineMarginalTests
         var arms = new IMarginal[] { new GammaMarginal(21, 6), new GammaMarginal(15, 4), new GammaMarginal(30, 9) };
         var plain = ProbabilityOfBest.Compute(arms);
         var scaled = ProbabilityOfBest.Compute(arms.Select(a => (IMarginal)new AffineMarginal(a, 120, -35)).ToArray());
-        for (int i = 0; i < arms.Length; i++) Close.Absolute(plain.Probabilities[i], scaled.Probabilities[i], 1e-13, $"arm {i}");
-        Close.Relative(120 * plain.ExpectedMaximum - 35, scaled.ExpectedMaximum, 1e-13, "E[max]");
+        for (int i = 0; i < arms.Length; i++) NumericAssert.Absolute(plain.Probabilities[i], scaled.Probabilities[i], 1e-13, $"arm {i}");
+        NumericAssert.Relative(120 * plain.ExpectedMaximum - 35, scaled.ExpectedMaximum, 1e-13, "E[max]");
     }
 
     [Fact]
@@ -47,6 +47,6 @@ public class AffineMarginalTests
         var dear = new AffineMarginal(new NormalMarginal(0.66, 0.02), 100, -14);    // u ~ N(52, 2)
         var result = ProbabilityOfBest.Compute([cheap, dear]);
         double expected = StandardNormal.Cdf((52.0 - 50.0) / Math.Sqrt(9 + 4));
-        Close.Absolute(expected, result.Probabilities[1], 1e-13, "dear arm best");
+        NumericAssert.Absolute(expected, result.Probabilities[1], 1e-13, "dear arm best");
     }
 }

@@ -9,7 +9,7 @@ public class IncompleteGammaTests
     {
         // GP05: Gamma(21, rate 6) posterior of the Bayes Rules! ch. 5 example (Johnson, Ott & Dogucu 2022),
         // P(λ > 4 | y) = Q(21, 24) = 0.242638687336755661266817083355 (REFERENCES.md §4, mpmath at 50 digits).
-        Close.Relative(0.242638687336755661266817083355, IncompleteGamma.UpperRegularized(21, 24), 1e-14, "Q(21,24)");
+        NumericAssert.Relative(0.242638687336755661266817083355, IncompleteGamma.UpperRegularized(21, 24), 1e-14, "Q(21,24)");
     }
 
     // Expected values: series / continued fraction in mpmath arithmetic at 40 digits
@@ -26,8 +26,8 @@ public class IncompleteGammaTests
     [InlineData(2.5, 30, 0.999999999987845430222817, 1.215456977718303894834853e-11)]
     public void BothTailsMatchMpmath(double a, double x, double lower, double upper)
     {
-        Close.Relative(lower, IncompleteGamma.LowerRegularized(a, x), 1e-13, $"P({a},{x})");
-        Close.Relative(upper, IncompleteGamma.UpperRegularized(a, x), 1e-13, $"Q({a},{x})");
+        NumericAssert.Relative(lower, IncompleteGamma.LowerRegularized(a, x), 1e-13, $"P({a},{x})");
+        NumericAssert.Relative(upper, IncompleteGamma.UpperRegularized(a, x), 1e-13, $"Q({a},{x})");
     }
 
     // Expected values: mpmath findroot on the 40-digit P(a,x) above.
@@ -38,7 +38,7 @@ public class IncompleteGammaTests
     [InlineData(1e4, 0.5, 9999.666668642047423736966)]
     [InlineData(0.1, 0.9, 0.2661545537388378558725947)]
     public void InverseMatchesMpmath(double a, double p, double expected) =>
-        Close.Relative(expected, IncompleteGamma.Inverse(a, p), 1e-14, $"P⁻¹({a},{p})");
+        NumericAssert.Relative(expected, IncompleteGamma.Inverse(a, p), 1e-14, $"P⁻¹({a},{p})");
 
     [Fact]
     public void ExponentialCaseIsClosedForm()
@@ -46,8 +46,8 @@ public class IncompleteGammaTests
         // Shape 1 is the exponential distribution: P(1,x) = 1 − e^(−x), Q(1,x) = e^(−x).
         foreach (double x in new[] { 1e-9, 0.2, 3.0, 40.0, 700.0 })
         {
-            Close.Relative(-SpecialFunctions.Expm1(-x), IncompleteGamma.LowerRegularized(1, x), 1e-15, "P(1,x)");
-            Close.Relative(Math.Exp(-x), IncompleteGamma.UpperRegularized(1, x), 1e-13, "Q(1,x)");
+            NumericAssert.Relative(-SpecialFunctions.Expm1(-x), IncompleteGamma.LowerRegularized(1, x), 1e-15, "P(1,x)");
+            NumericAssert.Relative(Math.Exp(-x), IncompleteGamma.UpperRegularized(1, x), 1e-13, "Q(1,x)");
         }
     }
 }

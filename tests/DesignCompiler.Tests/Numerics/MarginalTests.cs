@@ -26,8 +26,8 @@ public class MarginalTests
         {
             double x = m.Quantile(p);
             Assert.InRange(x, m.LowerBound, m.UpperBound);
-            Close.Relative(p, m.Cdf(x), 1e-12, $"{m} F(Q({p}))");
-            Close.Absolute(1.0, m.Cdf(x) + m.UpperTail(x), 1e-15, $"{m} F + Q");
+            NumericAssert.Relative(p, m.Cdf(x), 1e-12, $"{m} F(Q({p}))");
+            NumericAssert.Absolute(1.0, m.Cdf(x) + m.UpperTail(x), 1e-15, $"{m} F + Q");
         }
     }
 
@@ -41,9 +41,9 @@ public class MarginalTests
         {
             double x = m.Quantile(p), h = 1e-5 * Math.Min(m.Quantile(0.75) - m.Quantile(0.25), Math.Min(x - m.LowerBound, m.UpperBound - x));
             double slope = (m.Cdf(x + h) - m.Cdf(x - h)) / (2 * h);
-            Close.Relative(slope, m.Density(x), 1e-6, $"{m} density at {x}");
+            NumericAssert.Relative(slope, m.Density(x), 1e-6, $"{m} density at {x}");
             double logDensity = Math.Log(m.Density(x));
-            Close.Absolute(logDensity, m.LogDensity(x), 1e-14 * Math.Max(1, Math.Abs(logDensity)), $"{m} log density");
+            NumericAssert.Absolute(logDensity, m.LogDensity(x), 1e-14 * Math.Max(1, Math.Abs(logDensity)), $"{m} log density");
         }
     }
 
@@ -53,8 +53,8 @@ public class MarginalTests
         // NK05/NK06 (REFERENCES.md §3, Murphy 2007 known-variance model): posterior N(7/9, 4/9) for μ, 95% interval
         // 7/9 ± 1.96·(2/3) = (−0.528864878582258379238618509236, 2.08442043413781393479417406479).
         var interval = CredibleInterval.EqualTailed(new NormalMarginal(7.0 / 9, 2.0 / 3));
-        Close.Relative(-0.528864878582258379238618509236, interval.Lower, 1e-14, "NK05");
-        Close.Relative(2.08442043413781393479417406479, interval.Upper, 1e-14, "NK06");
+        NumericAssert.Relative(-0.528864878582258379238618509236, interval.Lower, 1e-14, "NK05");
+        NumericAssert.Relative(2.08442043413781393479417406479, interval.Upper, 1e-14, "NK06");
     }
 
     [Fact]
@@ -64,11 +64,11 @@ public class MarginalTests
         // df 9, location 7/6, scale √(61/405) = 0.388094426590510681029356525132; P(μ ≤ 1 | D) =
         // 0.3388472107024222676009414; 95% interval (0.288736079712880565978880471744, 2.04459725362045276735445286159).
         var mu = new StudentTMarginal(9, 7.0 / 6, Math.Sqrt(61.0 / 405));
-        Close.Relative(0.388094426590510681029356525132, mu.Scale, 1e-15, "NG08");
-        Close.Relative(0.3388472107024222676009414, mu.Cdf(1), 1e-14, "NG11");
+        NumericAssert.Relative(0.388094426590510681029356525132, mu.Scale, 1e-15, "NG08");
+        NumericAssert.Relative(0.3388472107024222676009414, mu.Cdf(1), 1e-14, "NG11");
         var interval = CredibleInterval.EqualTailed(mu);
-        Close.Relative(0.288736079712880565978880471744, interval.Lower, 1e-13, "NG12");
-        Close.Relative(2.04459725362045276735445286159, interval.Upper, 1e-14, "NG13");
+        NumericAssert.Relative(0.288736079712880565978880471744, interval.Lower, 1e-13, "NG12");
+        NumericAssert.Relative(2.04459725362045276735445286159, interval.Upper, 1e-14, "NG13");
     }
 
     [Fact]
@@ -77,21 +77,21 @@ public class MarginalTests
         // GP03–GP05 (REFERENCES.md §4, Bayes Rules! ch. 5): Gamma(21, 6) has mean 7/2, variance 7/12 and
         // P(λ > 4) = 0.242638687336755661266817083355.
         var lambda = new GammaMarginal(21, 6);
-        Close.Relative(3.5, lambda.Mean, 1e-15, "GP03");
-        Close.Relative(7.0 / 12, lambda.StdDev * lambda.StdDev, 1e-15, "GP04");
-        Close.Relative(0.242638687336755661266817083355, lambda.UpperTail(4), 1e-14, "GP05");
+        NumericAssert.Relative(3.5, lambda.Mean, 1e-15, "GP03");
+        NumericAssert.Relative(7.0 / 12, lambda.StdDev * lambda.StdDev, 1e-15, "GP04");
+        NumericAssert.Relative(0.242638687336755661266817083355, lambda.UpperTail(4), 1e-14, "GP05");
     }
 
     [Fact]
     public void MomentsAndBounds()
     {
         var beta = new BetaMarginal(2, 6);
-        Close.Relative(0.25, beta.Mean, 1e-15, "beta mean");
-        Close.Relative(Math.Sqrt(2.0 * 6 / (64 * 9)), beta.StdDev, 1e-15, "beta sd");
+        NumericAssert.Relative(0.25, beta.Mean, 1e-15, "beta mean");
+        NumericAssert.Relative(Math.Sqrt(2.0 * 6 / (64 * 9)), beta.StdDev, 1e-15, "beta sd");
         Assert.Equal(double.PositiveInfinity, new StudentTMarginal(2, 0, 1).StdDev);
-        Close.Relative(Math.Sqrt(5.0 / 3), new StudentTMarginal(5, 0, 1).StdDev, 1e-15, "t sd");
+        NumericAssert.Relative(Math.Sqrt(5.0 / 3), new StudentTMarginal(5, 0, 1).StdDev, 1e-15, "t sd");
         var affine = new AffineMarginal(beta, -4, 3);
-        Close.Relative(2.0, affine.Mean, 1e-15, "affine mean");
+        NumericAssert.Relative(2.0, affine.Mean, 1e-15, "affine mean");
         Assert.Equal(-1.0, affine.LowerBound);
         Assert.Equal(3.0, affine.UpperBound);
     }
@@ -104,11 +104,11 @@ public class MarginalTests
         var mirror = new BetaMarginal(8, 3);
         foreach (double u in new[] { 0.01, 0.4, 0.93 })
         {
-            Close.Relative(mirror.Cdf(u), reflected.Cdf(u), 1e-13, "cdf");
-            Close.Relative(mirror.UpperTail(u), reflected.UpperTail(u), 1e-13, "upper");
-            Close.Relative(mirror.Density(u), reflected.Density(u), 1e-13, "density");
+            NumericAssert.Relative(mirror.Cdf(u), reflected.Cdf(u), 1e-13, "cdf");
+            NumericAssert.Relative(mirror.UpperTail(u), reflected.UpperTail(u), 1e-13, "upper");
+            NumericAssert.Relative(mirror.Density(u), reflected.Density(u), 1e-13, "density");
         }
-        Close.Relative(mirror.Quantile(1e-12), reflected.Quantile(1e-12), 1e-12, "quantile in the far tail");
+        NumericAssert.Relative(mirror.Quantile(1e-12), reflected.Quantile(1e-12), 1e-12, "quantile in the far tail");
     }
 
     [Fact]

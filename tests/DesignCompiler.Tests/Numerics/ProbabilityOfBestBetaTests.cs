@@ -32,8 +32,8 @@ public class ProbabilityOfBestBetaTests
     {
         var arms = parameters.Select(p => (IMarginal)new BetaMarginal(p[0], p[1])).ToArray();
         var result = ProbabilityOfBest.Compute(arms);
-        for (int i = 0; i < arms.Length; i++) Close.Absolute(expected[i], result.Probabilities[i], 1e-12, $"{id} arm {i}");
-        Close.Absolute(1.0, result.Probabilities.Sum(), 1e-12, $"{id} sum");
+        for (int i = 0; i < arms.Length; i++) NumericAssert.Absolute(expected[i], result.Probabilities[i], 1e-12, $"{id} arm {i}");
+        NumericAssert.Absolute(1.0, result.Probabilities.Sum(), 1e-12, $"{id} sum");
         Assert.True(result.ErrorBound < 1e-9, $"{id} error bound {result.ErrorBound}");
     }
 
@@ -45,7 +45,7 @@ public class ProbabilityOfBestBetaTests
         Assert.Equal(result.Probabilities[0], result.Probabilities[2]);
         var uniform = ProbabilityOfBest.Compute([new BetaMarginal(1, 1), new BetaMarginal(1, 1), new BetaMarginal(1, 1), new BetaMarginal(1, 1)]);
         Assert.All(uniform.Probabilities, p => Assert.Equal(uniform.Probabilities[0], p));
-        Close.Absolute(0.25, uniform.Probabilities[0], 1e-15, "four equal arms");
+        NumericAssert.Absolute(0.25, uniform.Probabilities[0], 1e-15, "four equal arms");
     }
 
     [Fact]
@@ -64,7 +64,7 @@ public class ProbabilityOfBestBetaTests
         // P(best), at most P(Beta(1200,8800) > Beta(3400,6600)), is far below any double's resolution of 1.
         var result = ProbabilityOfBest.Compute([new BetaMarginal(30, 70), new BetaMarginal(1200, 8800), new BetaMarginal(3400, 6600)]);
         Assert.Equal(0.0, result.Probabilities[1]);
-        Close.Absolute(1.0, result.Probabilities[0] + result.Probabilities[2], 1e-14, "rest");
+        NumericAssert.Absolute(1.0, result.Probabilities[0] + result.Probabilities[2], 1e-14, "rest");
     }
 
     [Fact]
@@ -74,7 +74,7 @@ public class ProbabilityOfBestBetaTests
         // probability X², so P(peaked best) = E[X²] = Var X + (E X)² exactly.
         var arms = new IMarginal[] { new BetaMarginal(1, 1), new BetaMarginal(5000, 5000), new BetaMarginal(1, 1) };
         var result = ProbabilityOfBest.Compute(arms);
-        Close.Absolute(0.25 + 0.25 / 10001, result.Probabilities[1], 1e-12, "peaked arm");
+        NumericAssert.Absolute(0.25 + 0.25 / 10001, result.Probabilities[1], 1e-12, "peaked arm");
         Assert.Equal(result.Probabilities[0], result.Probabilities[2]);
     }
 
@@ -92,7 +92,7 @@ public class ProbabilityOfBestBetaTests
         }
         var result = ProbabilityOfBest.Compute(arms);
         Assert.All(result.Probabilities, p => Assert.InRange(p, 0.0, 1.0));
-        Close.Absolute(1.0, result.Probabilities.Sum(), 1e-12, "sum");
+        NumericAssert.Absolute(1.0, result.Probabilities.Sum(), 1e-12, "sum");
         Assert.True(result.ErrorBound < 1e-9, $"error bound {result.ErrorBound}");
         for (int i = 0; i < arms.Length; i++)
         {
@@ -110,9 +110,9 @@ public class ProbabilityOfBestBetaTests
         // representable interval below 1 is about 1e-8; the quadrature works in the distance from 1 there.
         // Reference: mpmath.quad at 25 digits (make_reference_values.py, case J1).
         var result = ProbabilityOfBest.Compute([new BetaMarginal(10.5, 0.5), new BetaMarginal(3.5, 0.5), new BetaMarginal(5.5, 2.5)]);
-        Close.Absolute(ReferenceValues.J1[0], result.Probabilities[0], 1e-12, "J1 arm 0");
-        Close.Absolute(ReferenceValues.J1[1], result.Probabilities[1], 1e-12, "J1 arm 1");
-        Close.Absolute(ReferenceValues.J1[2], result.Probabilities[2], 1e-12, "J1 arm 2");
+        NumericAssert.Absolute(ReferenceValues.J1[0], result.Probabilities[0], 1e-12, "J1 arm 0");
+        NumericAssert.Absolute(ReferenceValues.J1[1], result.Probabilities[1], 1e-12, "J1 arm 1");
+        NumericAssert.Absolute(ReferenceValues.J1[2], result.Probabilities[2], 1e-12, "J1 arm 2");
         Assert.True(result.ErrorBound < 1e-12, $"error bound {result.ErrorBound}");
     }
 }

@@ -18,11 +18,11 @@ public class ProbabilityOfBestContinuousTests
     {
         var result = ProbabilityOfBest.Compute([new NormalMarginal(mu1, sd1), new NormalMarginal(mu2, sd2)]);
         double theta = Math.Sqrt(sd1 * sd1 + sd2 * sd2), d = (mu1 - mu2) / theta;
-        Close.Absolute(StandardNormal.Cdf(d), result.Probabilities[0], 1e-12, "P(X > Y)");
-        Close.Absolute(StandardNormal.UpperTail(d), result.Probabilities[1], 1e-12, "P(Y > X)");
+        NumericAssert.Absolute(StandardNormal.Cdf(d), result.Probabilities[0], 1e-12, "P(X > Y)");
+        NumericAssert.Absolute(StandardNormal.UpperTail(d), result.Probabilities[1], 1e-12, "P(Y > X)");
         double clark = mu1 * StandardNormal.Cdf(d) + mu2 * StandardNormal.UpperTail(d) + theta * StandardNormal.Pdf(d);
-        Close.Absolute(clark, result.ExpectedMaximum, 1e-12 * Math.Max(1, Math.Abs(clark)), "E[max]");
-        Close.Absolute(clark - mu1, result.ExpectedLoss[0], 1e-12 * Math.Max(1, Math.Abs(clark)), "loss of arm 0");
+        NumericAssert.Absolute(clark, result.ExpectedMaximum, 1e-12 * Math.Max(1, Math.Abs(clark)), "E[max]");
+        NumericAssert.Absolute(clark - mu1, result.ExpectedLoss[0], 1e-12 * Math.Max(1, Math.Abs(clark)), "loss of arm 0");
     }
 
     [Fact]
@@ -32,7 +32,7 @@ public class ProbabilityOfBestContinuousTests
         // carry that much jitter; the closed form (above) is met to that resolution, not to 1e-12.
         var result = ProbabilityOfBest.Compute([new NormalMarginal(1.0, 1e-6), new NormalMarginal(1.0000001, 2e-6)]);
         double d = (1.0 - 1.0000001) / Math.Sqrt(1e-12 + 4e-12);
-        Close.Absolute(StandardNormal.Cdf(d), result.Probabilities[0], 1e-10, "P(X > Y)");
+        NumericAssert.Absolute(StandardNormal.Cdf(d), result.Probabilities[0], 1e-10, "P(X > Y)");
     }
 
     [Fact]
@@ -40,7 +40,7 @@ public class ProbabilityOfBestContinuousTests
     {
         // Cauchy is stable: X − Y ~ Cauchy(l1 − l2, s1 + s2), so P(X > Y) = ½ + atan((l1 − l2)/(s1 + s2))/π.
         var result = ProbabilityOfBest.Compute([new StudentTMarginal(1, 0.3, 2), new StudentTMarginal(1, -1, 0.5)]);
-        Close.Absolute(0.5 + Math.Atan(1.3 / 2.5) / Math.PI, result.Probabilities[0], 1e-12, "Cauchy");
+        NumericAssert.Absolute(0.5 + Math.Atan(1.3 / 2.5) / Math.PI, result.Probabilities[0], 1e-12, "Cauchy");
     }
 
     [Theory]
@@ -51,7 +51,7 @@ public class ProbabilityOfBestContinuousTests
         // For X ~ Gamma(a, r1), Y ~ Gamma(b, r2): r1X/(r1X + r2Y) ~ Beta(a,b), so P(X > Y) = 1 − I_{r1/(r1+r2)}(a,b).
         // Expected: that expression in mpmath at 40 digits (make_reference_values.py "closed").
         var result = ProbabilityOfBest.Compute([new GammaMarginal(a, r1), new GammaMarginal(b, r2)]);
-        Close.Absolute(expected, result.Probabilities[0], 1e-12, "P(X > Y)");
+        NumericAssert.Absolute(expected, result.Probabilities[0], 1e-12, "P(X > Y)");
     }
 
     // Reference: mpmath.quad at 25 digits (make_reference_values.py, section "best"; ReferenceValues).
@@ -70,9 +70,9 @@ public class ProbabilityOfBestContinuousTests
     {
         var (arms, probabilities, expectedMaximum) = ReferenceValues.Cases[id];
         var result = ProbabilityOfBest.Compute(arms);
-        for (int i = 0; i < arms.Length; i++) Close.Absolute(probabilities[i], result.Probabilities[i], 1e-12, $"{id} arm {i}");
-        Close.Absolute(1.0, result.Probabilities.Sum(), 1e-12, $"{id} sum");
-        if (expectedMaximum is double e) Close.Absolute(e, result.ExpectedMaximum, 1e-11 * Math.Max(1, Math.Abs(e)), $"{id} E[max]");
+        for (int i = 0; i < arms.Length; i++) NumericAssert.Absolute(probabilities[i], result.Probabilities[i], 1e-12, $"{id} arm {i}");
+        NumericAssert.Absolute(1.0, result.Probabilities.Sum(), 1e-12, $"{id} sum");
+        if (expectedMaximum is double e) NumericAssert.Absolute(e, result.ExpectedMaximum, 1e-11 * Math.Max(1, Math.Abs(e)), $"{id} E[max]");
         Assert.True(result.ErrorBound < 1e-9, $"{id} error bound {result.ErrorBound}");
     }
 
@@ -84,7 +84,7 @@ public class ProbabilityOfBestContinuousTests
         var result = ProbabilityOfBest.Compute([new StudentTMarginal(1, 0, 1), new StudentTMarginal(1, 0, 1e-3), new StudentTMarginal(1.5, 1, 10)]);
         Assert.True(double.IsFinite(result.ExpectedMaximum));
         Assert.All(result.ExpectedLoss, l => Assert.True(double.IsFinite(l) && l >= 0));
-        Close.Absolute(1.0, result.Probabilities.Sum(), 1e-12, "sum");
+        NumericAssert.Absolute(1.0, result.Probabilities.Sum(), 1e-12, "sum");
         Assert.True(result.ErrorBound < 1e-9, $"error bound {result.ErrorBound}");
     }
 }

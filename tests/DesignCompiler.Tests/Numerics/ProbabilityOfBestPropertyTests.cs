@@ -79,7 +79,7 @@ public class ProbabilityOfBestPropertyTests
         }
         var result = ProbabilityOfBest.Compute(arms);
         Assert.All(result.Probabilities, p => Assert.InRange(p, 0.0, 1.0));
-        Close.Absolute(1.0, result.Probabilities.Sum(), 1e-9, "sum");
+        NumericAssert.Absolute(1.0, result.Probabilities.Sum(), 1e-9, "sum");
     }
 
     [Fact]
@@ -88,7 +88,7 @@ public class ProbabilityOfBestPropertyTests
         // Beyond 128 arms the working memory comes from the shared array pool instead of the stack.
         var arms = Enumerable.Range(0, 150).Select(i => (IMarginal)new BetaMarginal(20 + i % 17, 60 - i % 13)).ToArray();
         var result = ProbabilityOfBest.Compute(arms);
-        Close.Absolute(1.0, result.Probabilities.Sum(), 1e-12, "sum");
+        NumericAssert.Absolute(1.0, result.Probabilities.Sum(), 1e-12, "sum");
         Assert.True(result.ErrorBound < 1e-9, $"error bound {result.ErrorBound}");
         var again = ProbabilityOfBest.Compute(arms);
         for (int i = 0; i < arms.Length; i++) Assert.True(result.Probabilities[i] == again.Probabilities[i], $"{i}: {result.Probabilities[i]:R} {again.Probabilities[i]:R} {result.ErrorBound} {again.ErrorBound}");

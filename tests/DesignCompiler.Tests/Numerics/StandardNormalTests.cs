@@ -9,7 +9,7 @@ public class StandardNormalTests
     {
         // NK04 (REFERENCES.md §3): z_0.975 = 1.95996398454005423552459443052, mpmath at 50 digits, for the
         // decimal p; the double 0.975 lies 2.2e-17 lower, which moves z by 3.8e-16.
-        Close.Relative(1.95996398454005423552459443052, StandardNormal.Quantile(0.975), 5e-16, "z(0.975)");
+        NumericAssert.Relative(1.95996398454005423552459443052, StandardNormal.Quantile(0.975), 5e-16, "z(0.975)");
     }
 
     // Expected values: mpmath 1.3.0 ncdf at 40 digits (make_reference_values.py "normal").
@@ -25,8 +25,8 @@ public class StandardNormalTests
     [InlineData(37.5, 4.605353009581954843827969e-308)]
     public void UpperTailMatchesMpmath(double z, double expected)
     {
-        Close.Relative(expected, StandardNormal.UpperTail(z), 3e-15, $"Q({z})");
-        Close.Relative(expected, StandardNormal.Cdf(-z), 3e-15, $"Φ({-z})");
+        NumericAssert.Relative(expected, StandardNormal.UpperTail(z), 3e-15, $"Q({z})");
+        NumericAssert.Relative(expected, StandardNormal.Cdf(-z), 3e-15, $"Φ({-z})");
     }
 
     // Expected values: mpmath findroot on ncdf at 40 digits, at the double p.
@@ -39,7 +39,7 @@ public class StandardNormalTests
     [InlineData(0.3, -0.5244005127080408159694544)]
     [InlineData(0.9, 1.281551565544600593487448)]
     public void QuantileMatchesMpmath(double p, double expected) =>
-        Close.Relative(expected, StandardNormal.Quantile(p), 4e-16, $"z({p})");
+        NumericAssert.Relative(expected, StandardNormal.Quantile(p), 4e-16, $"z({p})");
 
     [Fact]
     public void QuantileIsExactlyAntisymmetric()
@@ -58,8 +58,8 @@ public class StandardNormalTests
         // φ(z) = e^(−z²/2)/√(2π).
         foreach (double z in new[] { 0.0, 1.5, -7.0 })
         {
-            Close.Relative(Math.Exp(-z * z / 2) / Math.Sqrt(2 * Math.PI), Math.Exp(StandardNormal.LogPdf(z)), 4e-15, "φ");
-            Close.Relative(Math.Exp(-z * z / 2) / Math.Sqrt(2 * Math.PI), StandardNormal.Pdf(z), 4e-15, "φ");
+            NumericAssert.Relative(Math.Exp(-z * z / 2) / Math.Sqrt(2 * Math.PI), Math.Exp(StandardNormal.LogPdf(z)), 4e-15, "φ");
+            NumericAssert.Relative(Math.Exp(-z * z / 2) / Math.Sqrt(2 * Math.PI), StandardNormal.Pdf(z), 4e-15, "φ");
         }
     }
 }

@@ -13,7 +13,7 @@ public class StudentTTests
     [InlineData(10, 2.228)]
     [InlineData(30, 2.042)]
     public void QuantileAgreesWithHandbookTable(double df, double table) =>
-        Close.Absolute(table, StudentT.Quantile(df, 0.975), 0.0005, $"t(0.975; {df})");
+        NumericAssert.Absolute(table, StudentT.Quantile(df, 0.975), 0.0005, $"t(0.975; {df})");
 
     // TQ01–TQ30: REFERENCES.md §3 / refvalues.json `value_at_double_input` (mpmath at 50 digits; df = 1, 2 in
     // closed form tan(0.475π) and (2p−1)/√(2p(1−p))).
@@ -25,7 +25,7 @@ public class StudentTTests
     [InlineData("TQ10", 10, 2.22813885198627422451986193107)]
     [InlineData("TQ30", 30, 2.04227245630123788783499873215)]
     public void QuantileMatchesReference(string id, double df, double expected) =>
-        Close.Relative(expected, StudentT.Quantile(df, 0.975), 1e-14, id);
+        NumericAssert.Relative(expected, StudentT.Quantile(df, 0.975), 1e-14, id);
 
     // Expected values: mpmath, via I_x(df/2, ½) at 40 digits (make_reference_values.py "t").
     [Theory]
@@ -40,8 +40,8 @@ public class StudentTTests
     [InlineData(1e6, 3, 0.9986500687292891014706496, 0.001349931270710898529350441)]
     public void CdfAndUpperTailMatchMpmath(double df, double t, double cdf, double upper)
     {
-        Close.Relative(cdf, StudentT.Cdf(df, t), 1e-13, $"F({df},{t})");
-        Close.Relative(upper, StudentT.UpperTail(df, t), 1e-13, $"Q({df},{t})");
+        NumericAssert.Relative(cdf, StudentT.Cdf(df, t), 1e-13, $"F({df},{t})");
+        NumericAssert.Relative(upper, StudentT.UpperTail(df, t), 1e-13, $"Q({df},{t})");
     }
 
     // Expected values: mpmath findroot on the CDF above.
@@ -52,7 +52,7 @@ public class StudentTTests
     [InlineData(1e4, 0.975, 1.960201239890625877799337)]
     [InlineData(1e4, 1e-10, -6.36794135148280286784489)]
     public void QuantileMatchesMpmath(double df, double p, double expected) =>
-        Close.Relative(expected, StudentT.Quantile(df, p), 1e-13, $"t({df},{p})");
+        NumericAssert.Relative(expected, StudentT.Quantile(df, p), 1e-13, $"t({df},{p})");
 
     [Fact]
     public void CauchyIsClosedForm()
@@ -62,7 +62,7 @@ public class StudentTTests
         foreach (double t in new[] { -1e6, -2.0, 0.1, 30.0 })
         {
             double expected = t < 0 ? Math.Atan(-1 / t) / Math.PI : 0.5 + Math.Atan(t) / Math.PI;
-            Close.Relative(expected, StudentT.Cdf(1, t), 1e-14, "Cauchy");
+            NumericAssert.Relative(expected, StudentT.Cdf(1, t), 1e-14, "Cauchy");
         }
     }
 
@@ -70,8 +70,8 @@ public class StudentTTests
     public void LargeDfApproachesTheNormal()
     {
         // Far beyond the switch to the Cornish–Fisher expansion (A&S 26.7.5) the t is the normal.
-        Close.Relative(StandardNormal.Quantile(0.975), StudentT.Quantile(1e15, 0.975), 1e-14, "df → ∞");
-        Close.Relative(StandardNormal.UpperTail(3), StudentT.UpperTail(1e15, 3), 1e-13, "df → ∞");
+        NumericAssert.Relative(StandardNormal.Quantile(0.975), StudentT.Quantile(1e15, 0.975), 1e-14, "df → ∞");
+        NumericAssert.Relative(StandardNormal.UpperTail(3), StudentT.UpperTail(1e15, 3), 1e-13, "df → ∞");
     }
 
     [Fact]
@@ -81,11 +81,11 @@ public class StudentTTests
         // each other; the true change over this df interval is below 1e-15 relative.
         foreach (double p in new[] { 1e-12, 0.01, 0.3 })
         {
-            Close.Relative(StudentT.Quantile(99999.9999, p), StudentT.Quantile(100000.0001, p), 2e-12, $"quantile at {p}");
+            NumericAssert.Relative(StudentT.Quantile(99999.9999, p), StudentT.Quantile(100000.0001, p), 2e-12, $"quantile at {p}");
         }
         foreach (double t in new[] { -7.0, -2.0, 0.5 })
         {
-            Close.Relative(StudentT.Cdf(99999.9999, t), StudentT.Cdf(100000.0001, t), 2e-11, $"cdf at {t}");
+            NumericAssert.Relative(StudentT.Cdf(99999.9999, t), StudentT.Cdf(100000.0001, t), 2e-11, $"cdf at {t}");
         }
     }
 }

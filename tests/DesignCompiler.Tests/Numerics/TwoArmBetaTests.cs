@@ -20,15 +20,15 @@ public class TwoArmBetaTests
     [Theory]
     [MemberData(nameof(References))]
     public void ExactSumReproducesTheReference(string id, int a, int b, int c, int d, double expected) =>
-        Close.Absolute(expected, BetaInequality.ProbabilityGreater(a, b, c, d), 1e-11, id);
+        NumericAssert.Absolute(expected, BetaInequality.ProbabilityGreater(a, b, c, d), 1e-11, id);
 
     [Theory]
     [MemberData(nameof(References))]
     public void QuadratureMatchesTheReference(string id, int a, int b, int c, int d, double expected)
     {
         var result = ProbabilityOfBest.Compute([new BetaMarginal(a, b), new BetaMarginal(c, d)]);
-        Close.Absolute(expected, result.Probabilities[0], 1e-12, id);
-        Close.Absolute(1 - expected, result.Probabilities[1], 1e-12, id);
+        NumericAssert.Absolute(expected, result.Probabilities[0], 1e-12, id);
+        NumericAssert.Absolute(1 - expected, result.Probabilities[1], 1e-12, id);
     }
 
     [Fact]
@@ -37,7 +37,7 @@ public class TwoArmBetaTests
         // PG09: Beta(0.5,0.5) against Beta(1.5,2.5), 0.5900632743487446857278929 by 30-digit quadrature
         // (REFERENCES.md §2; three routes agree to 1e-41).
         var result = ProbabilityOfBest.Compute([new BetaMarginal(0.5, 0.5), new BetaMarginal(1.5, 2.5)]);
-        Close.Absolute(0.5900632743487446857278929, result.Probabilities[0], 1e-12, "PG09");
+        NumericAssert.Absolute(0.5900632743487446857278929, result.Probabilities[0], 1e-12, "PG09");
     }
 
     // More integer cases, from a handful of plots to ten thousand per arm, against the exact sum.
@@ -55,8 +55,8 @@ public class TwoArmBetaTests
     {
         double exact = BetaInequality.ProbabilityGreater(a, b, c, d);
         var result = ProbabilityOfBest.Compute([new BetaMarginal(a, b), new BetaMarginal(c, d)]);
-        Close.Absolute(exact, result.Probabilities[0], 1e-11, "P(X > Y)");
-        Close.Absolute(1 - exact, result.Probabilities[1], 1e-11, "P(Y > X)");
+        NumericAssert.Absolute(exact, result.Probabilities[0], 1e-11, "P(X > Y)");
+        NumericAssert.Absolute(1 - exact, result.Probabilities[1], 1e-11, "P(Y > X)");
     }
 
     [Fact]
@@ -65,8 +65,8 @@ public class TwoArmBetaTests
         // P(U > X) = E[1 − X] for U uniform, so a Beta(1,1) arm beats Beta(a,b) with probability b/(a+b),
         // however peaked Beta(a,b) is: here 5000 successes in 9998 plots next to an untried arm.
         var result = ProbabilityOfBest.Compute([new BetaMarginal(5000, 5000), new BetaMarginal(1, 1)]);
-        Close.Absolute(0.5, result.Probabilities[1], 1e-12, "uniform vs Beta(5000,5000)");
+        NumericAssert.Absolute(0.5, result.Probabilities[1], 1e-12, "uniform vs Beta(5000,5000)");
         var skewed = ProbabilityOfBest.Compute([new BetaMarginal(1, 1), new BetaMarginal(30, 9970)]);
-        Close.Absolute(9970.0 / 10000.0, skewed.Probabilities[0], 1e-12, "uniform vs Beta(30,9970)");
+        NumericAssert.Absolute(9970.0 / 10000.0, skewed.Probabilities[0], 1e-12, "uniform vs Beta(30,9970)");
     }
 }

@@ -4,7 +4,7 @@ namespace DesignCompiler.Tests.Randomness;
 
 /// <summary>
 /// SplitMix64: Steele, Lea and Flood (2014), "Fast splittable pseudorandom number generators".
-/// Expected outputs from reference/rng_reference.py, an independent transcription of the paper.
+/// Expected outputs from reference/rng_reference.py, an independent implementation of the paper.
 /// </summary>
 public class SplitMix64Tests
 {

@@ -3,8 +3,8 @@ using DesignCompiler.Randomness;
 namespace DesignCompiler.Tests.Randomness;
 
 /// <summary>
-/// StreamSeed.Derive against reference/rng_reference.py, which transcribes the formula in the
-/// StreamSeed documentation (SplitMix64 mixing, Steele, Lea and Flood 2014).
+/// StreamSeed.Derive against reference/rng_reference.py, which re-implements the formula written
+/// out in StreamSeed's doc comment (SplitMix64 mixing, Steele, Lea and Flood 2014).
 /// </summary>
 public class StreamSeedTests
 {

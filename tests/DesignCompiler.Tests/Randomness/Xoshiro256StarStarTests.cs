@@ -4,7 +4,7 @@ namespace DesignCompiler.Tests.Randomness;
 
 /// <summary>
 /// xoshiro256**: Blackman and Vigna (2018), "Scrambled linear pseudorandom number generators".
-/// Expected outputs from reference/rng_reference.py (independent Python transcription).
+/// Expected outputs from reference/rng_reference.py (independent Python implementation).
 /// </summary>
 public class Xoshiro256StarStarTests
 {

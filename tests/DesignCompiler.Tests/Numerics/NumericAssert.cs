@@ -1,7 +1,7 @@
 namespace DesignCompiler.Tests.Numerics;
 
 /// <summary>Assertions on floating-point results with the tolerance stated as relative or absolute.</summary>
-internal static class Close
+internal static class NumericAssert
 {
     public static void Relative(double expected, double actual, double tolerance, string? what = null)
     {
