@@ -93,7 +93,8 @@ internal readonly struct GammaKernel
     }
 
     // Q(a,x) = prefactor · (continued fraction) (DLMF 8.9.2; Numerical Recipes §6.2), modified Lentz.
-    private static double UpperContinuedFraction(double a, double x)
+    // The complementary error function uses it too, as erfc(x) = Q(½, x²).
+    internal static double UpperContinuedFraction(double a, double x)
     {
         const double tiny = 1e-300;
         double b = x + 1.0 - a, c = 1.0 / tiny, d = 1.0 / b, h = d;

@@ -43,26 +43,7 @@ public static partial class SpecialFunctions
     /// The continued fraction h with Q(½, s) = √s e^(−s) h / √π (Numerical Recipes §6.2, modified Lentz),
     /// valid for s ≥ 1.5 and fastest far out.
     /// </summary>
-    internal static double HalfGammaContinuedFraction(double s)
-    {
-        const double tiny = 1e-300;
-        double b = s + 0.5;
-        double c = 1.0 / tiny, d = 1.0 / b, h = d;
-        for (int i = 1; i < 1000; i++)
-        {
-            double an = -i * (i - 0.5);
-            b += 2.0;
-            d = an * d + b;
-            if (Math.Abs(d) < tiny) d = tiny;
-            c = b + an / c;
-            if (Math.Abs(c) < tiny) c = tiny;
-            d = 1.0 / d;
-            double delta = d * c;
-            h *= delta;
-            if (Math.Abs(delta - 1.0) <= 2.5e-16) break;
-        }
-        return h;
-    }
+    internal static double HalfGammaContinuedFraction(double s) => GammaKernel.UpperContinuedFraction(0.5, s);
 
     private static double ExpMinusSquare(double x)
     {
