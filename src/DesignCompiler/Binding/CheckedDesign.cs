@@ -65,6 +65,12 @@ public sealed class CheckedDesign
     public IReadOnlyList<DropRule> DropRules { get; }
     public IReadOnlyList<ScenarioSpec> Scenarios { get; }
 
+    /// <summary>How shares become whole plots (<c>rounding</c>; largest remainder unless written).</summary>
+    public RoundingRule Rounding { get; init; } = RoundingRule.LargestRemainder;
+
+    /// <summary>Whether a normal outcome's posterior adjusts for block and round effects (<c>model</c>).</summary>
+    public ModelSpec Model { get; init; } = ModelSpec.Independent;
+
     public int PlotsPerRound => Blocks.Sum(b => b.Plots);
 
     public ArmSpec? FindArm(string code) => Arms.FirstOrDefault(a => a.Code == code);

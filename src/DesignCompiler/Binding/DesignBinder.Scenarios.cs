@@ -23,13 +23,14 @@ public sealed partial class DesignBinder
                 Report(DiagnosticCatalog.EmptyName, statement.Name.Span, "a scenario's name");
                 continue;
             }
+            var effects = BindFieldEffects(statement, arms, outcome);
             if (statement.FromPrior)
             {
-                result.Add(new ScenarioSpec(name, true, [], null, statement.Span));
+                if (effects is not null) result.Add(new ScenarioSpec(name, true, [], null, statement.Span) { Effects = effects });
                 continue;
             }
             var scenario = BindScenarioValues(statement, arms, outcome);
-            if (scenario is not null) result.Add(scenario);
+            if (scenario is not null && effects is not null) result.Add(scenario with { Effects = effects });
         }
         return result;
     }
@@ -45,6 +46,7 @@ public sealed partial class DesignBinder
 
         foreach (var entry in statement.Entries)
         {
+            if (IsFieldEffect(entry.Kind)) continue;
             var key = entry.Kind switch
             {
                 ScenarioEntryKind.EveryArm => "every arm",
@@ -88,6 +90,78 @@ public sealed partial class DesignBinder
         }
         if (!ok) return null;
         return new ScenarioSpec(name, false, arms.Select(a => values[a.Index] ?? everyArm!.Value).ToList(), noise, statement.Span);
+    }
+
+    private static bool IsFieldEffect(ScenarioEntryKind kind) => kind is ScenarioEntryKind.Season or ScenarioEntryKind.Interaction
+        or ScenarioEntryKind.BlockEffect or ScenarioEntryKind.Missing or ScenarioEntryKind.Dispersion;
+
+    /// <summary>The scenario's season, block, missing-plot and dispersion entries, or null after reporting a problem.</summary>
+    private FieldEffects? BindFieldEffects(ScenarioStatementSyntax statement, IReadOnlyList<ArmSpec> arms, OutcomeSpec? outcome)
+    {
+        double season = 0, interaction = 0, block = 0, missing = 0;
+        double? dispersion = null;
+        var byArm = new double?[arms.Count];
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        var ok = true;
+        foreach (var entry in statement.Entries.Where(e => IsFieldEffect(e.Kind)))
+        {
+            var key = entry.Kind switch
+            {
+                ScenarioEntryKind.Season => "season sd",
+                ScenarioEntryKind.Interaction => "interaction sd",
+                ScenarioEntryKind.BlockEffect => "block sd",
+                ScenarioEntryKind.Dispersion => "dispersion",
+                _ => "missing" + (entry.Arm is null ? "" : " " + entry.Arm.Name),
+            };
+            if (!seen.Add(key))
+            {
+                Report(DiagnosticCatalog.ScenarioRepeatedArm, entry.Span, statement.Name.Value, key);
+                ok = false;
+                continue;
+            }
+            switch (entry.Kind)
+            {
+                case ScenarioEntryKind.Season:
+                    ok &= Assign(ref season, Real(entry.Value, "a season sd", "0 or more", v => v >= 0));
+                    break;
+                case ScenarioEntryKind.Interaction:
+                    ok &= Assign(ref interaction, Real(entry.Value, "an interaction sd", "0 or more", v => v >= 0));
+                    break;
+                case ScenarioEntryKind.BlockEffect:
+                    ok &= Assign(ref block, Real(entry.Value, "a block sd", "0 or more", v => v >= 0));
+                    break;
+                case ScenarioEntryKind.Dispersion:
+                    if (outcome is not null && outcome.Family != OutcomeFamily.Count)
+                    {
+                        Report(DiagnosticCatalog.ScenarioDispersionNotCount, entry.Span, outcome.FamilyText);
+                        ok = false;
+                        break;
+                    }
+                    dispersion = Positive(entry.Value, "a dispersion shape");
+                    ok &= dispersion is not null;
+                    break;
+                default:
+                    // Below 100 %: a scenario in which every plot is lost has nothing to simulate.
+                    var share = Real(entry.Value, "a missing-plot percentage", "0 or more and below 100", v => v is >= 0 and < 100) / 100;
+                    if (share is null) { ok = false; break; }
+                    if (entry.Arm is null) missing = share.Value;
+                    else if (ResolveArm(entry.Arm, arms) is { } index) byArm[index] = share.Value;
+                    else ok = false;
+                    break;
+            }
+        }
+        if (!ok) return null;
+        if (season == 0 && interaction == 0 && block == 0 && missing == 0 && dispersion is null && byArm.All(v => v is null))
+            return FieldEffects.None;
+        var perArm = byArm.Select(v => Math.Max(v ?? 0, missing)).ToList();
+        return new FieldEffects(season, interaction, block, missing, perArm, dispersion);
+    }
+
+    private static bool Assign(ref double target, double? value)
+    {
+        if (value is null) return false;
+        target = value.Value;
+        return true;
     }
 
     /// <summary>A true mean that the outcome family can take, or null after reporting it.</summary>

@@ -69,12 +69,18 @@ public sealed partial class DesignBinder
         var stops = statements.OfType<StopStatementSyntax>().Select(s => new StopRule(BindCriterion(s.Criterion), BindAfterRound(s.AfterRound, rounds), s.Span)).ToList();
         var drops = statements.OfType<DropStatementSyntax>().Select(s => new DropRule(BindCriterion(s.Criterion), BindAfterRound(s.AfterRound, rounds), s.Span)).ToList();
         var scenarios = BindScenarios(statements.OfType<ScenarioStatementSyntax>().ToList(), arms, outcome);
+        var rounding = BindRounding(Single<RoundingStatementSyntax>(statements, "rounding"));
+        var model = BindModel(Single<ModelStatementSyntax>(statements, "model"), outcome, blocks, rounds);
 
         if (_bag.HasErrors || rounds is null || outcome is null || seed is null || blocks is null)
             return new BindResult(null, _bag.ToSortedList());
 
         var design = new CheckedDesign(_source, syntax.Name?.Value ?? "", seed.Value, rounds.Value, outcome, valuation,
-            policy, arms, control, blocks, limits.Bounds, limits.Stocks, limits.Windows, rest, after, stops, drops, scenarios);
+            policy, arms, control, blocks, limits.Bounds, limits.Stocks, limits.Windows, rest, after, stops, drops, scenarios)
+        {
+            Rounding = rounding,
+            Model = model,
+        };
         return new BindResult(design, _bag.ToSortedList());
     }
 

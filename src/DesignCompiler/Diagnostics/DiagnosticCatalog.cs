@@ -56,6 +56,9 @@ public static class DiagnosticCatalog
     public static readonly DiagnosticDescriptor ScenarioOutsideSupport = Error("TD2062", "scenario value {0} for '{1}' is outside what a {2} outcome can take: {3}");
     public static readonly DiagnosticDescriptor ScenarioRepeatedArm = Error("TD2063", "scenario \"{0}\" gives '{1}' twice");
     public static readonly DiagnosticDescriptor ScenarioNoiseNotNormal = Error("TD2064", "'noise' in a scenario applies only to a normal outcome, not {0}");
+    public static readonly DiagnosticDescriptor ScenarioDispersionNotCount = Error("TD2065", "'dispersion' in a scenario applies only to a count outcome, not {0}");
+    public static readonly DiagnosticDescriptor AdjustedModelNotNormal = Error("TD2080", "'model {0}' needs a normal outcome; this design's outcome is {1}");
+    public static readonly DiagnosticDescriptor AdjustedModelNothingToAdjust = Warning("TD2081", "'model {0}' has nothing to adjust for: the design has a single {1}");
     public static readonly DiagnosticDescriptor RotationRestTooLong = Warning("TD2070", "a rest of {0} rounds in a {1}-round trial means each plot grows these arms at most once");
     public static readonly DiagnosticDescriptor RotationNeedsArms = Error("TD2072", "'every arm rest {0} rounds' needs at least {1} arms to sow a plot every round; the design has {2}");
     public static readonly DiagnosticDescriptor RotationSelf = Error("TD2071", "'{0} not after {0}' forbids a repeat; write 'rotation {0} rest 1 round'");

@@ -116,7 +116,8 @@ public sealed class RoundPlanner
         _policy.TargetShares(new PolicyContext(design, round, design.PlotsPerRound, available, values,
             allocationSummary.ProbabilityBest, state.Statistics), shares);
 
-        var totals = BoundedApportionment.Apportion(shares, design.PlotsPerRound, constraints.RoundMinimum, constraints.RoundMaximum);
+        var totals = BoundedApportionment.Apportion(shares, design.PlotsPerRound, constraints.RoundMinimum, constraints.RoundMaximum,
+            RoundingUniform(round));
         if (!totals.IsFeasible) return InfeasibilityReport.ForRound(design, constraints, totals);
 
         var table = ControlledRounding.Round(totals.Counts, design.Blocks.Select(b => b.Plots).ToArray(),
@@ -128,6 +129,15 @@ public sealed class RoundPlanner
         var plan = BuildPlan(state, round, posteriors, summary, shares, totals.Counts, table.Counts, placement.Assignments, dropped, newlyDropped, constraints);
         return new PlanResult(plan, null, []);
     }
+
+    /// <summary>
+    /// The one uniform number randomized rounding uses in a round, from the design seed, so the
+    /// sheets stay reproducible; null for largest remainder.
+    /// </summary>
+    private double? RoundingUniform(int round) =>
+        _design.Rounding == RoundingRule.Randomized
+            ? new Randomness.Xoshiro256StarStar(Randomness.StreamSeed.Derive(_design.Seed, StreamPurpose.Rounding, (ulong)round, 0)).NextDouble()
+            : null;
 
     /// <summary>
     /// A drop rule may not empty the field: when the arms left could not fill the round within

@@ -111,6 +111,27 @@ internal static class DesignGrammar
     internal static readonly Parser<StatementSyntax> PolicyStatement =
         Node(Keyword("policy").Then(_ => Policy), (p, s) => new PolicyStatementSyntax(p, s));
 
+    internal static readonly Parser<StatementSyntax> RoundingStatement =
+        Node(Keyword("rounding").Then(_ => Keyword("largest-remainder").Or(Keyword("randomized"))
+                .Named("'largest-remainder' or 'randomized'")),
+            (method, s) => new RoundingStatementSyntax(method, s));
+
+    // --- how the posterior treats the field -------------------------------------
+    /// <summary>(adjusts for block, adjusts for round).</summary>
+    internal static readonly Parser<(bool Block, bool Round)> AdjustedTerms =
+        Keyword("block").Then(_ => Keyword("and").Then(_ => Keyword("round")).Optional())
+            .Select(andRound => (true, andRound.IsDefined))
+            .Or(Keyword("round").Return((false, true)))
+            .Named("'block', 'block and round' or 'round'");
+
+    internal static readonly Parser<StatementSyntax> ModelStatement =
+        Node(
+            Keyword("model").Then(_ =>
+                Keyword("independent").Return((Block: false, Round: false))
+                    .Or(Keyword("adjusts").Then(_ => Keyword("for")).Then(_ => AdjustedTerms))
+                    .Named("'independent' or 'adjusts for block [and round]'")),
+            (terms, s) => new ModelStatementSyntax(terms.Block, terms.Round, s));
+
     // --- priors ----------------------------------------------------------------
     internal static readonly Parser<PriorSyntax> BetaPrior =
         Node(
@@ -343,18 +364,38 @@ internal static class DesignGrammar
     // --- scenarios ------------------------------------------------------------------
     private static Parser<T> Spaced<T>(Parser<T> parser) => from value in parser from space in AnySpace select value;
 
+    internal static readonly Parser<ScenarioEntrySyntax> FieldEffect =
+        Node(Keyword("season").Then(_ => Keyword("sd")).Then(_ => Number),
+                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Season, null, v, s))
+            .Or(Node(Keyword("interaction").Then(_ => Keyword("sd")).Then(_ => Number),
+                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Interaction, null, v, s)))
+            .Or(Node(Keyword("block").Then(_ => Keyword("sd")).Then(_ => Number),
+                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.BlockEffect, null, v, s)))
+            .Or(Node(
+                from word in Keyword("missing")
+                from arm in Identifier.Optional()
+                from value in Number
+                from percent in Symbol("%")
+                select (arm: arm.GetOrDefault(), value),
+                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Missing, v.arm, v.value, s)))
+            .Or(Node(Keyword("dispersion").Then(_ => Number),
+                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Dispersion, null, v, s)))
+            .Named("'season sd S', 'interaction sd S', 'block sd S', 'missing [ARM] P%' or 'dispersion K'");
+
     internal static readonly Parser<ScenarioEntrySyntax> ScenarioEntry =
-        Node(Keyword("every").Then(_ => Keyword("arm")).Then(_ => Number),
+        FieldEffect.Or(Node(Keyword("every").Then(_ => Keyword("arm")).Then(_ => Number),
                 (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.EveryArm, null, v, s))
             .Or(Node(Keyword("noise").Then(_ => Number), (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Noise, null, v, s)))
             .Or(Node(from arm in Identifier from value in Number select (arm, value),
-                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Arm, v.arm, v.value, s)))
-            .Named("'every arm V', 'ARM V' or 'noise SD'");
+                (v, s) => new ScenarioEntrySyntax(ScenarioEntryKind.Arm, v.arm, v.value, s))))
+            .Named("'every arm V', 'ARM V', 'noise SD' or a field effect ('season sd S', 'block sd S', 'missing P%', ...)");
 
-    /// <summary>Either <c>from prior</c> (null entries) or a list of entries.</summary>
-    internal static readonly Parser<ScenarioEntrySyntax[]?> ScenarioBody =
-        Spaced(Keyword("from").Then(_ => Keyword("prior"))).Return((ScenarioEntrySyntax[]?)null)
-            .Or(Spaced(ScenarioEntry).AtLeastOnce().Select(e => (ScenarioEntrySyntax[]?)e.ToArray()));
+    /// <summary><c>from prior</c> with its field effects, or a list of entries.</summary>
+    internal static readonly Parser<(bool FromPrior, ScenarioEntrySyntax[] Entries)> ScenarioBody =
+        (from fromPrior in Spaced(Keyword("from").Then(_ => Keyword("prior")))
+         from effects in Spaced(FieldEffect).Many()
+         select (true, effects.ToArray()))
+            .Or(Spaced(ScenarioEntry).AtLeastOnce().Select(e => (false, e.ToArray())));
 
     internal static readonly Parser<StatementSyntax> ScenarioStatement =
         Node(
@@ -364,14 +405,14 @@ internal static class DesignGrammar
             from body in ScenarioBody
             from close in Symbol("}")
             select (name, body),
-            (v, s) => new ScenarioStatementSyntax(v.name, v.body is null, v.body ?? [], s));
+            (v, s) => new ScenarioStatementSyntax(v.name, v.body.FromPrior, v.body.Entries, s));
 
     // --- statements and the trial ---------------------------------------------------
     internal static readonly Parser<StatementSyntax> Statement =
         SeedStatement.Or(RoundsStatement).Or(OutcomeStatement).Or(GoalStatement).Or(PriceStatement)
             .Or(PolicyStatement).Or(DefaultPriorStatement).Or(ArmStatement).Or(ControlStatement)
             .Or(PlotsStatement).Or(BlockStatement).Or(LimitStatement).Or(RotationStatement)
-            .Or(StopStatement).Or(DropStatement).Or(ScenarioStatement);
+            .Or(StopStatement).Or(DropStatement).Or(ScenarioStatement).Or(RoundingStatement).Or(ModelStatement);
 
     /// <summary>
     /// Every keyword of the language. An arm code may not be one of them (grammar/trial.ebnf),
@@ -384,14 +425,16 @@ internal static class DesignGrammar
         "ucb1", "kl-ucb", "c", "epsilon-greedy", "epsilon", "decreasing", "explore-then-commit", "equal",
         "default", "prior", "arm", "cost", "control", "mean", "worth", "plots", "plot", "gamma", "shape", "rate",
         "per", "block", "layout", "x", "limit", "every", "stock", "from", "until", "rotation", "rest", "not",
-        "after", "stop", "when", "drop", "best", "loss", "scenario",
+        "after", "stop", "when", "drop", "best", "loss", "scenario", "rounding", "largest-remainder",
+        "randomized", "model", "independent", "adjusts", "for", "and", "season", "interaction", "missing",
+        "dispersion",
     ];
 
     /// <summary>The words that begin a statement, for "did you mean" hints.</summary>
     internal static readonly IReadOnlyList<string> StatementKeywords =
     [
         "seed", "rounds", "outcome", "goal", "price", "policy", "default", "arm", "control",
-        "plots", "block", "limit", "rotation", "stop", "drop", "scenario",
+        "plots", "block", "limit", "rotation", "stop", "drop", "scenario", "rounding", "model",
     ];
 
     internal static readonly Parser<StringSyntax> TrialHeader =

@@ -17,10 +17,15 @@ namespace DesignCompiler.Planning.Allocation;
 /// <see cref="ApportionmentTolerance"/> tie rule of <see cref="Hamilton"/> (snap to integers
 /// within 1e-9·total; remainders that close count as tied; the lower index wins).</item>
 /// </list>
+/// With a uniform number, step 2 is <see cref="SystematicRemainder"/> instead (the design's
+/// <c>rounding randomized</c>): the same quotas, rounded so that each arm's expected count equals
+/// its quota.
+/// <para>
 /// Consequences: the counts sum to the total, every count is within its bounds and is the
 /// floor or the ceiling of its (snapped) clipped quota, and with bounds that do not bind the
 /// result is exactly <see cref="Hamilton"/>'s. Like Hamilton's method it is not
 /// house-monotone (the Alabama paradox can occur).
+/// </para>
 /// <para>
 /// Infeasible input (negative total or minimum, a bad share, a minimum above its maximum,
 /// minimums that need more than the total, maximums that hold less) is reported in the
@@ -36,10 +41,11 @@ public static class BoundedApportionment
         ReadOnlySpan<double> targetShares,
         int total,
         ReadOnlySpan<int> minimum,
-        ReadOnlySpan<int> maximum)
+        ReadOnlySpan<int> maximum,
+        double? uniform = null)
     {
         var counts = new int[targetShares.Length];
-        ApportionmentStatus status = Apportion(targetShares, total, minimum, maximum, counts);
+        ApportionmentStatus status = Apportion(targetShares, total, minimum, maximum, counts, uniform);
         return new ApportionmentResult(status, counts);
     }
 
@@ -52,7 +58,8 @@ public static class BoundedApportionment
         int total,
         ReadOnlySpan<int> minimum,
         ReadOnlySpan<int> maximum,
-        Span<int> counts)
+        Span<int> counts,
+        double? uniform = null)
     {
         int n = targetShares.Length;
         if (minimum.Length != n || maximum.Length != n || counts.Length != n)
@@ -72,7 +79,16 @@ public static class BoundedApportionment
             SpillOntoZeroShareArms(targetShares, total, minimum, maximum, quotas);
         }
 
-        LargestRemainder.Distribute(quotas, total, minimum, maximum, ApportionmentTolerance.For(total), counts);
+        // Step 2: largest remainder, or (with a uniform number) randomized systematic rounding.
+        if (uniform is { } u)
+        {
+            SystematicRemainder.Distribute(quotas, total, minimum, maximum, ApportionmentTolerance.For(total), u, counts);
+        }
+        else
+        {
+            LargestRemainder.Distribute(quotas, total, minimum, maximum, ApportionmentTolerance.For(total), counts);
+        }
+
         return status;
     }
 

@@ -12,4 +12,7 @@ public static class StreamPurpose
 
     /// <summary>Outcomes and true values of one simulated trial: stream (seed, 2, replication).</summary>
     public const ulong Simulation = 2;
+
+    /// <summary>The uniform number of randomized rounding in round r: stream (seed, 3, round, 0), its first double.</summary>
+    public const ulong Rounding = 3;
 }
