@@ -49,12 +49,18 @@ public static class TrialReplay
             state.Issue(plan with { Arms = arms, Assignments = plots });
         }
 
+        var blockOfPlot = new Dictionary<(int Round, string Plot), int>();
+        foreach (var round in issued)
+            foreach (var a in round.ReadPlan().Assignments)
+                blockOfPlot[(round.Round, a.PlotId)] = a.BlockIndex;
+
         foreach (var round in recorded.Where(r => r.Recording is not null))
         {
             foreach (var outcome in round.Recording!.Outcomes)
             {
                 if (outcome.Value is not { } value) continue;
-                if (index.TryGetValue(outcome.Arm, out var i)) state.Record(i, value);
+                var block = blockOfPlot.GetValueOrDefault((round.Round, outcome.PlotId));
+                if (index.TryGetValue(outcome.Arm, out var i)) state.Record(i, value, block, round.Round);
                 else problems.Add(Unknown(design, outcome.Arm, round.Round));
             }
             state.RoundsCompleted++;

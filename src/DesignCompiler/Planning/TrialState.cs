@@ -26,10 +26,20 @@ public sealed class TrialState
     public bool[] Dropped { get; }
     public int RoundsCompleted { get; set; }
 
+    /// <summary>Every recorded plot with its block and round, oldest first; models that adjust for block and round read it.</summary>
+    public List<PlotObservation> Observations { get; } = [];
+
     public int PlotsRecorded => Statistics.Sum(s => s.Count);
 
-    /// <summary>Adds one recorded plot's outcome to its arm.</summary>
-    public void Record(int arm, double value) => Statistics[arm] = Statistics[arm].Add(value);
+    /// <summary>Adds one recorded plot's outcome to its arm; block is the design-order index, round is 1-based.</summary>
+    public void Record(int arm, double value, int block, int round)
+    {
+        Statistics[arm] = Statistics[arm].Add(value);
+        Observations.Add(new PlotObservation(arm, block, round, value));
+    }
+
+    /// <summary>Adds a plot of the round now being recorded, in the first block (single-block designs and tests).</summary>
+    public void Record(int arm, double value) => Record(arm, value, 0, RoundsCompleted + 1);
 
     /// <summary>Takes an issued plan into account: its plots count against each arm's stock, and arms it dropped stay dropped.</summary>
     public void Issue(RoundPlan plan)
@@ -49,6 +59,10 @@ public sealed class TrialState
         Array.Clear(PlotsIssued);
         Array.Clear(Dropped);
         History.Clear();
+        Observations.Clear();
         RoundsCompleted = 0;
     }
 }
+
+/// <summary>One recorded plot: arm and block in design order, round from 1, the value as recorded.</summary>
+public readonly record struct PlotObservation(int Arm, int Block, int Round, double Value);

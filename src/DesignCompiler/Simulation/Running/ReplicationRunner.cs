@@ -21,6 +21,7 @@ public sealed class ReplicationRunner
     private readonly Xoshiro256StarStar[] _armStreams;
     private readonly ulong[] _armKeys;
     private readonly int[] _inTrial;
+    private readonly FieldShifts _shifts;
 
     public ReplicationRunner(RoundPlanner planner)
     {
@@ -31,6 +32,7 @@ public sealed class ReplicationRunner
         _armStreams = new Xoshiro256StarStar[arms];
         _armKeys = _design.Arms.Select(a => SimulationStreams.Key(a.Code)).ToArray();
         _inTrial = new int[arms];
+        _shifts = new FieldShifts(_design);
     }
 
     public CheckedDesign Design => _design;
@@ -53,6 +55,7 @@ public sealed class ReplicationRunner
         }
         record.BestValue = best;
         for (var i = 0; i < arms; i++) _armStreams[i] = SimulationStreams.Outcomes(seed, replication, world.Key, _armKeys[i]);
+        _shifts.BeginTrial(world.Effects, seed, replication, world.Key);
 
         _state.Reset();
         for (var round = 1; round <= _design.Rounds; round++)
@@ -69,6 +72,7 @@ public sealed class ReplicationRunner
                 break;
             }
             if (round > 1) record.LeaderAfterRound[round - 2] = LeaderOf(plan);
+            _shifts.BeginRound();
             Sow(plan, round - 1, record);
             _state.Issue(plan);
             _state.RoundsCompleted = round;
@@ -92,9 +96,21 @@ public sealed class ReplicationRunner
         foreach (var plot in plan.Assignments)
         {
             var arm = plot.Arm;
-            var y = OutcomeDraw.Draw(outcome, ref _armStreams[arm], record.TrueMean[arm], record.NoiseSd[arm]);
-            _state.Record(arm, y);
             record.Plots[arm, roundIndex]++;
+            if (_shifts.Active)
+            {
+                // The plot was sown (it counts against stock and regret) but may give no result.
+                var lost = _shifts.IsLost(arm);
+                var theta = _shifts.Theta(arm, plot.BlockIndex, record.TrueMean[arm]);
+                if (outcome.Family == OutcomeFamily.Count) theta = _shifts.MixCount(arm, theta, ref _armStreams[arm]);
+                var shifted = OutcomeDraw.Draw(outcome, ref _armStreams[arm], theta, record.NoiseSd[arm]);
+                if (!lost) _state.Record(arm, shifted, plot.BlockIndex, roundIndex + 1);
+            }
+            else
+            {
+                var y = OutcomeDraw.Draw(outcome, ref _armStreams[arm], record.TrueMean[arm], record.NoiseSd[arm]);
+                _state.Record(arm, y, plot.BlockIndex, roundIndex + 1);
+            }
             regret += record.BestValue - record.Value[arm];
             if (!record.IsBest(arm)) record.NonBestPlots++;
         }

@@ -17,6 +17,7 @@ public sealed class ScenarioWorld
     public ScenarioWorld(CheckedDesign design, ScenarioSpec scenario, string? keyName = null)
     {
         _design = design;
+        Effects = scenario.Effects;
         var arms = design.Arms.Count;
         if (!scenario.FromPrior)
         {
@@ -31,6 +32,9 @@ public sealed class ScenarioWorld
     }
 
     public ScenarioInfo Info { get; }
+
+    /// <summary>The scenario's season, block, missing-plot and dispersion departures.</summary>
+    public FieldEffects Effects { get; }
 
     public ulong Key { get; }
 
