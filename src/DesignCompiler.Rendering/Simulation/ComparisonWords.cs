@@ -31,9 +31,16 @@ public static class ComparisonWords
     /// "B has lower expected regret than A, by 1.2 EUR (95 % interval 0.9 to 1.5)." Only for a
     /// difference whose interval excludes zero; otherwise nothing is claimed.
     /// </summary>
-    public static string Verdict(FigureComparison f, bool allArmsEqual, string valueUnit)
+    public static string Verdict(FigureComparison f, bool allArmsEqual, string valueUnit, string nameA = "A", string nameB = "B")
     {
         if (!f.IsClear) return "";
+        var sentence = Sentence(f, allArmsEqual, valueUnit);
+        // The sentence is written for "B … than A"; the names are swapped in at the two places they stand.
+        return nameB + sentence[1..^0].Replace(" than A", " than " + nameA, StringComparison.Ordinal);
+    }
+
+    private static string Sentence(FigureComparison f, bool allArmsEqual, string valueUnit)
+    {
         var d = f.Difference;
         var lower = d.Mean < 0;
         var size = FigureText.AtPrecision(Math.Abs(d.Mean), d.StandardError);

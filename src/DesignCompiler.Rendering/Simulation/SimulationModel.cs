@@ -24,7 +24,24 @@ public sealed record SimulationModel(
     string Margin,
     string MarginRule,
     IReadOnlyList<ArmInfoModel> Arms,
-    IReadOnlyList<ScenarioModel> Scenarios);
+    IReadOnlyList<ScenarioModel> Scenarios,
+    bool HasEqualTwin,
+    IReadOnlyList<TwinScenarioModel> EqualTwin);
+
+/// <summary>
+/// The design against its equal-allocation twin in one scenario, on the same random numbers:
+/// <see cref="FigureModel.A"/> is the design, <see cref="FigureModel.B"/> the twin, differences twin − design.
+/// </summary>
+public sealed record TwinScenarioModel(
+    string Name,
+    bool AllArmsEqual,
+    IReadOnlyList<FigureModel> Figures,
+    IReadOnlyList<string> Verdicts,
+    IReadOnlyList<TwinBiasModel> Bias,
+    IReadOnlyList<ChartModel> Charts);
+
+/// <summary>An arm's naive-mean bias under the design and under equal allocation.</summary>
+public sealed record TwinBiasModel(string Code, EstimateModel Design, EstimateModel Equal);
 
 public sealed record ArmInfoModel(string Code, string Label, bool IsControl);
 

@@ -20,7 +20,47 @@ public static class SimulationModelBuilder
             setup.Rounds, setup.PlotsPerRound, FigureText.Whole(setup.Replications), FigureText.Whole(report.Finished),
             report.CutShort, CutShortText(report.CutShort, report.Finished, setup.Replications),
             NumberText.Exact(setup.Margin), setup.MarginRule,
-            setup.Arms.Select(a => new ArmInfoModel(a.Code, a.Label, a.IsControl)).ToList(), scenarios);
+            setup.Arms.Select(a => new ArmInfoModel(a.Code, a.Label, a.IsControl)).ToList(), scenarios,
+            report.EqualTwin is not null, (report.EqualTwin ?? []).Select((t, i) => Twin(setup, t, "t" + (i + 1).ToString(CultureInfo.InvariantCulture))).ToList());
+    }
+
+    private static TwinScenarioModel Twin(SimulationSetup setup, DesignCompiler.Simulation.Comparisons.ComparedScenario s, string id)
+    {
+        var equal = s.A.Scenario.AllArmsEqual;
+        var unit = setup.ValueUnit ?? "";
+        var figures = s.Figures.Select(f =>
+        {
+            var d = f.Difference;
+            return new FigureModel(ComparisonWords.Key(f.Figure), ComparisonWords.Label(f.Figure, equal),
+                FigureText.Model(f.A), FigureText.Model(f.B), FigureText.Model(d),
+                NumberText.Exact(d.Lower95), NumberText.Exact(d.Upper95),
+                FigureText.Signed(d.Mean, d.StandardError),
+                double.IsFinite(d.StandardError)
+                    ? FigureText.AtPrecision(d.Lower95, d.StandardError) + " to " + FigureText.AtPrecision(d.Upper95, d.StandardError)
+                    : "-",
+                f.IsClear, ComparisonWords.Verdict(f, equal, unit, "this design", "Equal allocation"));
+        }).ToList();
+        var bias = setup.Arms.Select((arm, a) => new TwinBiasModel(arm.Code, FigureText.Model(s.A.Arms[a].Bias), FigureText.Model(s.B.Arms[a].Bias))).ToList();
+        var rounds = setup.Rounds;
+        var valueUnit = string.IsNullOrEmpty(setup.ValueUnit) ? "value units" : setup.ValueUnit;
+        ChartModel[] charts =
+        [
+            SvgChartBuilder.Build(id + "-regret", "Cumulative regret by round, this design and equal allocation",
+                "Mean regret summed over the rounds so far, with 95 % Monte Carlo bands; same random numbers for both.",
+                "round", "regret (" + valueUnit + ")", rounds,
+                [
+                    Band("this design", s.A.ByRound.Select(r => r.CumulativeRegret).ToList(), 0),
+                    Band("equal", s.B.ByRound.Select(r => r.CumulativeRegret).ToList(), 1),
+                ]),
+            SvgChartBuilder.Build(id + "-selection", "Probability of selecting the best arm, this design and equal allocation",
+                "Share of simulated trials whose leading arm is truly best if the trial ended after each round.",
+                "round", "probability", rounds,
+                [
+                    new ChartSeries("this design", s.A.ByRound.Select(r => r.CorrectSelection.Mean).ToList(), Style: 0),
+                    new ChartSeries("equal", s.B.ByRound.Select(r => r.CorrectSelection.Mean).ToList(), Style: 1),
+                ], fixedMaximum: 1),
+        ];
+        return new TwinScenarioModel(s.Name, equal, figures, figures.Where(f => f.Clear).Select(f => f.Verdict).ToList(), bias, charts);
     }
 
     public static string CutShortText(bool cutShort, long finished, long requested) => cutShort

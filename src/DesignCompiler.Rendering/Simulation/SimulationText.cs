@@ -13,6 +13,7 @@ public static class SimulationText
         o.Append($"margin {model.MarginRule}\n");
         if (model.CutShort) o.Append("*** ").Append(model.CutShortText).Append(" ***\n");
         foreach (var s in model.Scenarios) Scenario(o, s);
+        foreach (var t in model.EqualTwin) Twin(o, t);
         o.Append('\n').Append("Figures are mean ± Monte Carlo standard error. Regret = Σ over sown plots of (best true value − the plot's arm's true value).\n");
         o.Append("The final selection is the arm with the highest P(best) after the last recorded round; a winner is declared when a stop rule fires.\n");
         return o.ToString();
@@ -61,6 +62,20 @@ public static class SimulationText
         var calibration = new TextTable().Row("P(best) bin", "pairs", "mean P(best)", "truly best", "SE", "");
         foreach (var c in s.Calibration) calibration.Row(c.RangeText, c.Pairs, c.MeanProbabilityText, c.FrequencyText, c.SeText, c.Agreement);
         calibration.WriteTo(o, "    ");
+    }
+
+    private static void Twin(StringBuilder o, TwinScenarioModel t)
+    {
+        o.Append('\n').Append($"Against equal allocation, scenario \"{t.Name}\" (same plots, limits, rules and random numbers; difference = equal − this design):\n");
+        var table = new TextTable().Row("figure", "this design", "equal allocation", "difference", "95 % interval");
+        foreach (var f in t.Figures) table.Row(f.Label, f.A.Text, f.B.Text, f.DifferenceText, f.IntervalText);
+        table.WriteTo(o, "  ");
+        var bias = new TextTable().Row("arm", "bias, this design", "bias, equal allocation");
+        foreach (var b in t.Bias) bias.Row(b.Code, b.Design.Text, b.Equal.Text);
+        o.Append("  bias of the naive final mean:\n");
+        bias.WriteTo(o, "    ");
+        foreach (var v in t.Verdicts) o.Append("  ").Append(v).Append('\n');
+        if (t.Verdicts.Count == 0) o.Append("  no figure differs clearly (every 95 % interval includes zero)\n");
     }
 
     private static string Unit(string unit) => unit == "" ? "units of the mean outcome (success probability for yes/no and counts out of N)" : unit;

@@ -73,6 +73,19 @@ public sealed class CheckedDesign
 
     public int PlotsPerRound => Blocks.Sum(b => b.Plots);
 
+    /// <summary>
+    /// The same design with every plot shared equally: same plots, blocks, rounds, limits, stop
+    /// and drop rules, and model; the policy is 'equal'. <c>simulate</c> runs it beside the design
+    /// so every report shows what adaptive allocation buys and costs.
+    /// </summary>
+    public CheckedDesign EqualTwin() =>
+        new(Source, Name, Seed, Rounds, Outcome, Valuation, new PolicySpec(Syntax.PolicyKind.Equal, 0, false, default),
+            Arms, Control, Blocks, Bounds, Stocks, Windows, RestRules, AfterRules, StopRules, DropRules, Scenarios)
+        {
+            Rounding = Rounding,
+            Model = Model,
+        };
+
     public ArmSpec? FindArm(string code) => Arms.FirstOrDefault(a => a.Code == code);
 
     public SourceLocation Locate(TextSpan span) => SourceLocation.In(Source, span);

@@ -49,7 +49,9 @@ public sealed class SimulateCliTests(ITestOutputHelper output)
             Assert.True(run.ExitCode == 0, run.Error);
             var html = File.ReadAllText(file);
             Assert.StartsWith("<!DOCTYPE html>", html);
-            Assert.Equal(3 * (2 + 4), html.Split("<svg ").Length - 1);
+            // Per scenario: regret, selection and one small chart per arm; then regret and selection against equal allocation.
+            Assert.Equal(3 * (2 + 4) + 3 * 2, html.Split("<svg ").Length - 1);
+            Assert.Contains("<h2>Against equal allocation</h2>", html);
             Assert.Contains("stroke-dasharray=\"7 4\"", html);
             Assert.Contains("Cumulative regret by round", html);
             Assert.Contains("false-positive rate", html);

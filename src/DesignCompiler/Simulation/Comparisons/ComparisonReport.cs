@@ -15,15 +15,19 @@ public sealed record ComparisonReport(
 
     public static ComparisonReport Build(ComparisonResult result)
     {
-        var scenarios = result.A.Scenarios.Select((s, i) =>
-        {
-            var a = ReportBuilder.Scenario(result.A, s, result.SummariesA[i]);
-            var b = ReportBuilder.Scenario(result.B, result.B.Scenarios[i], result.SummariesB[i]);
-            var figures = Enum.GetValues<ComparedFigure>().Select(f =>
-                new FigureComparison(f, Pick(a, f), Pick(b, f), result.Differences[i].Difference(f).Estimate())).ToList();
-            return new ComparedScenario(s.Name, a, b, figures);
-        }).ToList();
+        var scenarios = result.A.Scenarios.Select((s, i) => Compare(
+            ReportBuilder.Scenario(result.A, s, result.SummariesA[i]),
+            ReportBuilder.Scenario(result.B, result.B.Scenarios[i], result.SummariesB[i]),
+            result.Differences[i])).ToList();
         return new ComparisonReport(result.A, result.B, scenarios, result.Notes, result.CutShort);
+    }
+
+    /// <summary>One scenario's two reports side by side with the paired differences B − A.</summary>
+    public static ComparedScenario Compare(ScenarioReport a, ScenarioReport b, PairedAccumulator differences)
+    {
+        var figures = Enum.GetValues<ComparedFigure>().Select(f =>
+            new FigureComparison(f, Pick(a, f), Pick(b, f), differences.Difference(f).Estimate())).ToList();
+        return new ComparedScenario(a.Scenario.Name, a, b, figures);
     }
 
     private static Estimate Pick(ScenarioReport report, ComparedFigure figure) => figure switch

@@ -25,7 +25,7 @@ public static class PartialMerge
         foreach (var part in parts)
         {
             var shard = part.Result.Shard;
-            if (PartialWriter.SetupText(part.Result.Setup) != setupText)
+            if (PartialWriter.SetupText(part.Result.Setup) != setupText || (part.Result.Twin is null) != (first.Result.Twin is null))
                 problems.Add(Problem(SimulationDiagnostics.PartialsDisagree, part.Path, first.Path, Difference(first.Result.Setup, part.Result.Setup)));
             else if (shard.Count != count)
                 problems.Add(Problem(SimulationDiagnostics.PartialsDisagree, part.Path, first.Path,
@@ -46,7 +46,18 @@ public static class PartialMerge
         var totals = setup.Scenarios.Select(_ => new ScenarioAccumulator(setup.Arms.Count, setup.Rounds, setup.PlotsPerRound, setup.Margin)).ToArray();
         foreach (var part in parts)
             for (var s = 0; s < totals.Length; s++) totals[s].Add(part.Result.Scenarios[s]);
-        return (new SimulationResult(setup, Shard.Whole, totals, parts.Any(p => p.Result.CutShort)), []);
+        var merged = new SimulationResult(setup, Shard.Whole, totals, parts.Any(p => p.Result.CutShort));
+        if (first.Result.Twin is not { } firstTwin) return (merged, []);
+        var twinSetup = firstTwin.Setup;
+        var twinTotals = twinSetup.Scenarios.Select(_ => new ScenarioAccumulator(twinSetup.Arms.Count, twinSetup.Rounds, twinSetup.PlotsPerRound, twinSetup.Margin)).ToArray();
+        var paired = twinSetup.Scenarios.Select(_ => new PairedAccumulator()).ToArray();
+        foreach (var part in parts)
+            for (var s = 0; s < twinTotals.Length; s++)
+            {
+                twinTotals[s].Add(part.Result.Twin!.Scenarios[s]);
+                paired[s].Add(part.Result.Twin.Differences[s]);
+            }
+        return (merged with { Twin = new TwinResult(twinSetup, twinTotals, paired) }, []);
     }
 
     private static string Difference(SimulationSetup a, SimulationSetup b)
@@ -55,6 +66,7 @@ public static class PartialMerge
         if (a.Seed != b.Seed) return FormattableString.Invariant($"it used seed {b.Seed}, not {a.Seed}");
         if (a.Replications != b.Replications) return FormattableString.Invariant($"it was part of {b.Replications} replications, not {a.Replications}");
         if (a.Margin != b.Margin) return "it used another margin";
+        if (a.Policy != b.Policy) return "it simulated another policy";
         return "its scenarios or settings differ";
     }
 

@@ -28,12 +28,33 @@ public static class PartialReader
             var setup = ReadSetup(root.GetProperty("setup"));
             var summaries = root.GetProperty("scenarios").EnumerateArray().Select(s => ReadSummary(s, setup)).ToList();
             if (summaries.Count != setup.Scenarios.Count) throw new FormatException("it has summaries for a different number of scenarios than it lists");
-            return new SimulationResult(setup, shard, summaries, root.GetProperty("cutShort").GetBoolean());
+            return new SimulationResult(setup, shard, summaries, root.GetProperty("cutShort").GetBoolean())
+            {
+                Twin = root.GetProperty("equalTwin") is { ValueKind: JsonValueKind.Object } twin ? ReadTwin(twin) : null,
+            };
         }
         catch (Exception e) when (e is JsonException or KeyNotFoundException or InvalidOperationException or ArgumentException or OverflowException)
         {
             throw new FormatException(e.Message, e);
         }
+    }
+
+    private static TwinResult ReadTwin(JsonElement e)
+    {
+        var setup = ReadSetup(e.GetProperty("setup"));
+        var summaries = e.GetProperty("scenarios").EnumerateArray().Select(s => ReadSummary(s, setup)).ToList();
+        var figures = Enum.GetValues<Comparisons.ComparedFigure>();
+        var differences = e.GetProperty("differences").EnumerateArray().Select(d =>
+        {
+            var items = d.EnumerateArray().ToList();
+            if (items.Count != figures.Length) throw new FormatException("the equal-allocation twin's differences have the wrong length");
+            var paired = new PairedAccumulator();
+            for (var f = 0; f < figures.Length; f++) ReadMoments(items[f], paired.Difference(figures[f]));
+            return paired;
+        }).ToList();
+        if (summaries.Count != setup.Scenarios.Count || differences.Count != summaries.Count)
+            throw new FormatException("the equal-allocation twin has summaries for a different number of scenarios than it lists");
+        return new TwinResult(setup, summaries, differences);
     }
 
     private static SimulationSetup ReadSetup(JsonElement e)

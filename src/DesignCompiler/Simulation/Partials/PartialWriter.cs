@@ -14,7 +14,7 @@ namespace DesignCompiler.Simulation.Partials;
 public static class PartialWriter
 {
     public const string FormatName = "trialc-simulation-partial";
-    public const int FormatVersion = 1;
+    public const int FormatVersion = 2;
 
     public static string Write(SimulationResult result)
     {
@@ -34,9 +34,30 @@ public static class PartialWriter
             json.WriteStartArray("scenarios");
             foreach (var summary in result.Scenarios) WriteSummary(json, summary);
             json.WriteEndArray();
+            if (result.Twin is { } twin) WriteTwin(json, twin);
+            else json.WriteNull("equalTwin");
             json.WriteEndObject();
         }
         return Encoding.UTF8.GetString(buffer.ToArray()) + "\n";
+    }
+
+    private static void WriteTwin(Utf8JsonWriter json, TwinResult twin)
+    {
+        json.WriteStartObject("equalTwin");
+        json.WritePropertyName("setup");
+        WriteSetup(json, twin.Setup);
+        json.WriteStartArray("scenarios");
+        foreach (var summary in twin.Scenarios) WriteSummary(json, summary);
+        json.WriteEndArray();
+        json.WriteStartArray("differences");
+        foreach (var paired in twin.Differences)
+        {
+            json.WriteStartArray();
+            foreach (var figure in Enum.GetValues<Comparisons.ComparedFigure>()) WriteMoments(json, null, paired.Difference(figure));
+            json.WriteEndArray();
+        }
+        json.WriteEndArray();
+        json.WriteEndObject();
     }
 
     /// <summary>The setup alone, in the file's form; two parts belong together when theirs are equal.</summary>

@@ -9,8 +9,14 @@ namespace DesignCompiler.Simulation.Reports;
 /// </summary>
 public static class ReportBuilder
 {
-    public static SimulationReport Build(SimulationResult result) =>
-        Build(result.Setup, result.Scenarios, result.CutShort);
+    public static SimulationReport Build(SimulationResult result)
+    {
+        var report = Build(result.Setup, result.Scenarios, result.CutShort);
+        if (result.Twin is not { } twin) return report;
+        var compared = report.Scenarios.Select((s, i) => Comparisons.ComparisonReport.Compare(
+            s, Scenario(twin.Setup, twin.Setup.Scenarios[i], twin.Scenarios[i]), twin.Differences[i])).ToList();
+        return report with { EqualTwin = compared };
+    }
 
     public static SimulationReport Build(SimulationSetup setup, IReadOnlyList<ScenarioAccumulator> summaries, bool cutShort) =>
         new(setup, setup.Scenarios.Select((s, i) => Scenario(setup, s, summaries[i])).ToList(), cutShort);
