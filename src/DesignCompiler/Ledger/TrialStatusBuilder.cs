@@ -23,7 +23,7 @@ public static class TrialStatusBuilder
         var now = TrialReplay.Now(design, history);
         if (now.Value is not { } state) return LedgerResult<TrialStatus>.Fail(now.Diagnostics);
 
-        var (posteriors, summary) = Assess(design, planner.Model, state);
+        var (posteriors, summary) = Assess(planner, state);
         var last = history.LastRound?.ReadPlan();
         var arms = design.Arms.Select(arm =>
         {
@@ -41,7 +41,7 @@ public static class TrialStatusBuilder
         {
             var after = TrialReplay.AfterRecorded(design, history, k);
             if (after.Value is null) return LedgerResult<TrialStatus>.Fail(after.Diagnostics);
-            points.Add(new RoundPoint(k, Assess(design, planner.Model, after.Value).Summary.ProbabilityBest.ToList()));
+            points.Add(new RoundPoint(k, Assess(planner, after.Value).Summary.ProbabilityBest.ToList()));
         }
 
         var stocks = design.Stocks.Select(s => new StockStanding(design.Arms[s.Arm].Code, s.Plots, state.PlotsIssued[s.Arm],
@@ -58,17 +58,12 @@ public static class TrialStatusBuilder
             arms, Rules(design, state, summary), stocks, points, history.Amendments, Next(planner, history, state), history.HeadHash));
     }
 
-    private static (IMarginal[] Posteriors, BestArmSummary Summary) Assess(CheckedDesign design, IOutcomeModel model, TrialState state)
+    /// <summary>The planner's own belief, among the arms still in the trial.</summary>
+    private static (IMarginal[] Posteriors, BestArmSummary Summary) Assess(RoundPlanner planner, TrialState state)
     {
-        var posteriors = new IMarginal[design.Arms.Count];
-        var values = new IMarginal[design.Arms.Count];
-        for (var i = 0; i < design.Arms.Count; i++)
-        {
-            posteriors[i] = model.Posterior(design.Arms[i].Prior, state.Statistics[i]);
-            values[i] = new AffineMarginal(posteriors[i], design.Valuation.Scale, -design.Arms[i].Cost);
-        }
-        var inTrial = Enumerable.Range(0, design.Arms.Count).Where(i => !state.Dropped[i]).ToList();
-        return (posteriors, BestArmSummary.Of(values, inTrial));
+        var belief = planner.Believe(state);
+        var inTrial = Enumerable.Range(0, state.Dropped.Length).Where(i => !state.Dropped[i]).ToList();
+        return (belief.Posteriors, belief.Summarize(inTrial));
     }
 
     private static List<RuleStanding> Rules(CheckedDesign design, TrialState state, BestArmSummary summary)

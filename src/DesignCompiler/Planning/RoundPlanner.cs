@@ -42,6 +42,9 @@ public sealed class RoundPlanner
     public static (RoundPlanner? Planner, Diagnostic? Problem) For(CheckedDesign design) =>
         (new RoundPlanner(design, OutcomeModels.For(design.Outcome), AllocationPolicies.For(design.Policy)), null);
 
+    /// <summary>The posteriors of every arm from what <paramref name="state"/> has recorded.</summary>
+    public TrialBelief Believe(TrialState state) => TrialBelief.For(_design, _model, state);
+
     public PlanResult Plan(TrialState state, int round)
     {
         var design = _design;
@@ -49,18 +52,13 @@ public sealed class RoundPlanner
             return Fail(DiagnosticCatalog.RoundOutOfRange, design.Locate(default), round, design.Rounds);
 
         var arms = design.Arms.Count;
-        var posteriors = new IMarginal[arms];
-        var values = new IMarginal[arms];
-        var scale = design.Valuation.Scale;
-        for (var i = 0; i < arms; i++)
-        {
-            posteriors[i] = _model.Posterior(design.Arms[i].Prior, state.Statistics[i]);
-            values[i] = new AffineMarginal(posteriors[i], scale, -design.Arms[i].Cost);
-        }
+        var belief = Believe(state);
+        var posteriors = belief.Posteriors;
+        var values = belief.Values;
 
         var dropped = (bool[])state.Dropped.Clone();
         var inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
-        var summary = BestArmSummary.Of(values, inTrial);
+        var summary = belief.Summarize(inTrial);
 
         // Drop rules, then stop rules, on what is known after the last recorded round.
         var newlyDropped = new bool[arms];
@@ -77,7 +75,7 @@ public sealed class RoundPlanner
             {
                 for (var i = 0; i < arms; i++) dropped[i] |= newlyDropped[i];
                 inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
-                summary = BestArmSummary.Of(values, inTrial);
+                summary = belief.Summarize(inTrial);
             }
 
             foreach (var rule in design.StopRules)
@@ -95,7 +93,7 @@ public sealed class RoundPlanner
         {
             for (var i = 0; i < arms; i++) newlyDropped[i] &= dropped[i];
             inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
-            summary = BestArmSummary.Of(values, inTrial);
+            summary = belief.Summarize(inTrial);
         }
 
         var rotation = RotationRules.For(design, round, state.History);
@@ -110,7 +108,7 @@ public sealed class RoundPlanner
         }
 
         var sown = Enumerable.Range(0, arms).Where(i => available[i]).ToList();
-        var allocationSummary = sown.SequenceEqual(inTrial) ? summary : BestArmSummary.Of(values, sown);
+        var allocationSummary = sown.SequenceEqual(inTrial) ? summary : belief.Summarize(sown);
 
         var shares = new double[arms];
         _policy.TargetShares(new PolicyContext(design, round, design.PlotsPerRound, available, values,

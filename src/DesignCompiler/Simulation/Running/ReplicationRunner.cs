@@ -135,16 +135,10 @@ public sealed class ReplicationRunner
     private void FinalSelection(ReplicationRecord record)
     {
         var arms = _design.Arms.Count;
-        var model = _planner.Model;
-        var values = new IMarginal[arms];
         var count = 0;
         for (var i = 0; i < arms; i++)
-        {
-            var arm = _design.Arms[i];
-            values[i] = new AffineMarginal(model.Posterior(arm.Prior, _state.Statistics[i]), _design.Valuation.Scale, -arm.Cost);
             if (!_state.Dropped[i]) _inTrial[count++] = i;
-        }
-        var summary = BestArmSummary.Of(values, new ArraySegment<int>(_inTrial, 0, count));
+        var summary = _planner.Believe(_state).Summarize(new ArraySegment<int>(_inTrial, 0, count));
         summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
         for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = summary.Leader;
     }
