@@ -3,10 +3,11 @@ using DesignCompiler.Binding;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Planning;
 using DesignCompiler.Rendering.Models;
+using DesignCompiler.Rendering.Workbook;
 
 namespace DesignCompiler.Rendering;
 
-/// <summary>The files a compiled round produces, rendered from the built-in templates.</summary>
+/// <summary>The files a compiled round produces: the built-in templates' CSV, HTML, JSON and Markdown, and the crew workbook.</summary>
 public static class RoundOutputs
 {
     public static string ToolVersion =>
@@ -31,6 +32,7 @@ public static class RoundOutputs
             diagnostics.AddRange(result.Diagnostics);
             if (result.Text is not null) files.Add((prefix + "." + extension, Utf8NoBom.GetBytes(result.Text)));
         }
+        files.Add((prefix + ".xlsx", CrewWorkbook.Build(model, design.Outcome)));
         return (files, diagnostics);
     }
 

@@ -23,11 +23,13 @@ public sealed class CompileCommandTests
 
             var csv = File.ReadAllText(Path.Combine(dir, "cover-crops-round1.csv"));
             var lines = csv.Split("\r\n", StringSplitOptions.RemoveEmptyEntries);
-            Assert.Equal("round,block,plot,row,column,arm,label,outcome,notes", lines[0]);
-            Assert.Equal(37, lines.Length);
-            Assert.StartsWith("1,north,north-1-1,1,1,", lines[1]);
+            // A '#' line traces the sheet; 'trialc record' skips it.
+            Assert.Matches("^# Late-sown cover mixes; round 1 of 4; design [0-9a-f]{12}; seed 20260815; policy thompson; trialc \\d+\\.\\d+\\.\\d+$", lines[0]);
+            Assert.Equal("round,block,plot,row,column,arm,label,outcome,notes", lines[1]);
+            Assert.Equal(38, lines.Length);
+            Assert.StartsWith("1,north,north-1-1,1,1,", lines[2]);
             // RFC 4180: a field with a comma is quoted; this label has none, so it stands bare.
-            Assert.All(lines.Skip(1), l => Assert.EndsWith(",,", l));
+            Assert.All(lines.Skip(2), l => Assert.EndsWith(",,", l));
 
             var html = File.ReadAllText(Path.Combine(dir, "cover-crops-round1.html"));
             Assert.Contains("product label, local regulations and qualified agronomic advice", html);
