@@ -36,7 +36,7 @@ public static class XlsxSheet
             using var stream = new MemoryStream(bytes, writable: false);
             using var document = SpreadsheetDocument.Open(stream, false, new OpenSettings { MaxCharactersInPart = MaxCharactersInPart });
             if (document.WorkbookPart is not { Workbook: { } workbook } workbookPart)
-                return Refused(path, "it is a zip file without a spreadsheet inside; return the .xlsx workbook trialc wrote, or the CSV sheet");
+                return Refused(path, "it is a zip file without a spreadsheet inside; return the .xlsx workbook trialc wrote, or the sheet saved as 'CSV UTF-8'");
             return ReadWorkbook(path, workbookPart, workbook);
         }
         catch (Exception e) when (e is OpenXmlPackageException or InvalidDataException or XmlException or FileFormatException
