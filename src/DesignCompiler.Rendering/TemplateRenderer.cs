@@ -1,3 +1,4 @@
+using System.Text.RegularExpressions;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Text;
 using Scriban;
@@ -15,7 +16,7 @@ public sealed record RenderResult(string? Text, IReadOnlyList<Diagnostic> Diagno
 /// formatting functions. Output is culture-invariant. Every error names the template's file,
 /// line and column, what went wrong and how to fix it.
 /// </summary>
-public static class TemplateRenderer
+public static partial class TemplateRenderer
 {
     public static RenderResult RenderBuiltIn(string name, object model) =>
         Render(new SourceText("template:" + name, BuiltInTemplates.Text(name)), model);
@@ -54,15 +55,18 @@ public static class TemplateRenderer
     /// <summary>"did you mean 'plot_list'?" when the message names a variable or member that is not in the model.</summary>
     private static string? NameHint(string message, object model)
     {
-        var start = message.IndexOf('`');
-        var end = start < 0 ? -1 : message.IndexOf('`', start + 1);
-        if (end < 0) return null;
-        var word = message[(start + 1)..end];
+        var match = MissingName().Match(message);
+        if (!match.Success) return null;
+        var word = match.Groups["name"].Value.TrimEnd('.');
         var last = word[(word.LastIndexOf('.') + 1)..];
         return Suggestions.DidYouMean(last, ModelNames.Of(model.GetType()).Concat(TemplateFunctions.Names)) is { } hint
-            ? hint + "; " + TemplateDiagnostics.RuntimeHint
+            ? hint + " A" + TemplateDiagnostics.RuntimeHint[1..]
             : null;
     }
+
+    /// <summary>Scriban names a missing variable in backquotes, a missing member after "with name".</summary>
+    [GeneratedRegex(@"`(?<name>[^`]+)` was not found|member with name (?<name>[A-Za-z_][A-Za-z0-9_.]*)", RegexOptions.CultureInvariant)]
+    private static partial Regex MissingName();
 
     /// <summary>Scriban's messages end with a full stop or not; ours read as one clause.</summary>
     private static string Sentence(string message) => message.Trim().TrimEnd('.');

@@ -29,6 +29,7 @@ internal static class LedgerCompile
     public static int Run(CliConsole console, string designPath, CheckedDesign design, RoundPlanner planner,
         string ledgerPath, string? outDirectory, string format, string? amend, int? round, IReadOnlyList<UserTemplate> templates)
     {
+        var isNew = !File.Exists(ledgerPath);
         using var ledger = LedgerCommandSupport.Open(console, ledgerPath, create: true);
         if (ledger is null) return ExitCodes.InputErrors;
 
@@ -36,7 +37,16 @@ internal static class LedgerCompile
         var result = ledger.Update(LedgerCommandSupport.Actor(),
             (history, appender) => Decide(design, planner, history, appender, stem, amend, round, templates));
         console.Report(result.Diagnostics);
-        if (result.HasErrors || result.Value is not { } outcome) return ExitCodes.InputErrors;
+        if (result.HasErrors || result.Value is not { } outcome)
+        {
+            // A ledger this command created holds nothing after a failed first round: take it away again, so nothing is left behind.
+            if (isNew)
+            {
+                ledger.Dispose();
+                DiscardEmptyLedger(ledgerPath);
+            }
+            return ExitCodes.InputErrors;
+        }
 
         // With --format json standard output carries the plan alone, so the messages go beside it.
         var messages = format == "json" && outcome.Plan is not null ? console.Error : console.Out;
@@ -144,6 +154,21 @@ internal static class LedgerCompile
         messages.Add(FormattableString.Invariant(
             $"round {open.Round} was issued on {open.Entry.Date} by {open.Entry.User} and awaits results for {open.Plots.Count} plots; its sheets are issued again unchanged"));
         return LedgerResult<Outcome>.Ok(new Outcome(Kind.Reissued, plan, stored, open.PlanJson, messages), warnings);
+    }
+
+    private static void DiscardEmptyLedger(string path)
+    {
+        try
+        {
+            File.Delete(path);
+        }
+        catch (IOException)
+        {
+            // An empty ledger left behind is harmless: the next compile starts round 1 in it.
+        }
+        catch (UnauthorizedAccessException)
+        {
+        }
     }
 
     private static string Since(LedgerHistory history)

@@ -25,6 +25,9 @@ public sealed class CompiledRound : IDisposable
 
     public string Text(string extension) => System.IO.File.ReadAllText(File(extension));
 
+    /// <summary>The round report, written beside the sheets as STEM-round1-report.html.</summary>
+    public string ReportText => System.IO.File.ReadAllText(Path.Combine(Folder, $"{Stem}-round1-report.html"));
+
     public string DesignHashShort => Plan.GetProperty("designHash").GetString()![..12];
 
     public string Seed => Plan.GetProperty("seed").GetRawText();
