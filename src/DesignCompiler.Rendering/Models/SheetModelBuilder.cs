@@ -34,8 +34,8 @@ public static class SheetModelBuilder
     /// <summary>What the density chart's x axis measures: the arm's mean outcome, in the outcome's words.</summary>
     public static string DensityAxis(OutcomeSpec outcome) => outcome.Family switch
     {
-        OutcomeFamily.Bernoulli => $"chance of {outcome.Name} on a plot",
-        OutcomeFamily.Binomial => FormattableString.Invariant($"chance of {outcome.Name} for each of the {outcome.Trials} on a plot"),
+        OutcomeFamily.Bernoulli => $"{outcome.Name}: chance per plot",
+        OutcomeFamily.Binomial => FormattableString.Invariant($"{outcome.Name}: chance for each of the {outcome.Trials} per plot"),
         _ => "mean " + outcome.Name + " per plot" + (outcome.Unit is null ? "" : " (" + outcome.Unit + ")"),
     };
 

@@ -7,13 +7,14 @@ namespace DesignCompiler.Planning;
 /// <summary>
 /// Each arm's posterior density for its mean outcome on one grid shared by all arms, with its
 /// mean and 95 % equal-tailed interval: what a round report draws. The grid runs from the
-/// smallest 0.05 % quantile to the largest 99.95 % quantile over the arms, inside the support,
-/// so every curve is drawn where it has mass and no density is evaluated at a pole.
+/// smallest 0.5 % quantile to the largest 99.5 % quantile over the arms, inside the support, so
+/// every curve is drawn where it has mass, no density is evaluated at a pole, and the heavy tails
+/// of a Student-t posterior (unknown noise, few plots) do not squeeze every curve into the middle.
 /// </summary>
 public sealed record PosteriorCurves(IReadOnlyList<double> Grid, IReadOnlyList<ArmCurve> Arms)
 {
     public const int Points = 161;
-    private const double Tail = 0.0005;
+    private const double Tail = 0.005;
 
     public static PosteriorCurves Of(CheckedDesign design, IOutcomeModel model, TrialState state)
     {

@@ -24,7 +24,7 @@ public sealed class RoundReportTests
         Assert.All(lines, l => Assert.Single(l.Split(' ')));
         Assert.Single(Regex.Matches(html, "<tr><th>prior</th>"));
         Assert.Contains("from its prior alone, before any result", html);
-        Assert.Contains("chance of established on a plot", html);
+        Assert.Contains("established: chance per plot", html);
         AssertBlackAndWhite(html);
     }
 
@@ -65,7 +65,7 @@ public sealed class RoundReportTests
     [Theory]
     [InlineData("nitrogen-rates.trial", "mean yield per plot (t/ha)")]
     [InlineData("aphid-margins.trial", "mean aphids per plot (aphids per 20 tillers)")]
-    [InlineData("germination.trial", "chance of emerged for each of the 50 on a plot")]
+    [InlineData("germination.trial", "emerged: chance for each of the 50 per plot")]
     public void The_density_axis_names_the_outcome_in_its_unit(string example, string axis)
     {
         using var round = new CompiledRound(example);
