@@ -70,7 +70,11 @@ internal static class ProbabilityBestChartLayout
         _ => "1 6",
     };
 
-    /// <summary>Moves label positions apart to at least <see cref="LabelGap"/> pixels, keeping their order and staying in the plot.</summary>
+    /// <summary>
+    /// Moves label positions apart to at least <see cref="LabelGap"/> pixels, keeping their order and staying in the plot:
+    /// a stack that would run past the bottom axis (many arms level near 0, as before any result) is moved up as a whole,
+    /// so no label sits on the round axis's tick labels.
+    /// </summary>
     private static double[] SpreadLabels(List<double> wanted)
     {
         var order = wanted.Select((y, i) => (y, i)).OrderBy(p => p.y).ThenBy(p => p.i).ToList();
@@ -81,7 +85,7 @@ internal static class ProbabilityBestChartLayout
             placed[i] = Math.Max(y, previous + LabelGap);
             previous = placed[i];
         }
-        var overflow = previous - (Bottom + 8);
+        var overflow = previous - (Bottom - 4);
         if (overflow > 0)
             foreach (var (_, i) in order) placed[i] -= overflow;
         return placed;
