@@ -147,7 +147,7 @@ public sealed class UserTemplateTests
     {
         using var trial = new LedgerTrial("aphid-margins.trial");
         trial.Issue(1);
-        var template = TemporaryTemplate("brief.txt.sbn", "{{ trial }} after {{ rounds_recorded }} of {{ rounds }} rounds; seed {{ seed }}\n{{ for arm in arms }}{{ arm.code }} {{ arm.plots_issued }}\n{{ end }}");
+        var template = TemporaryTemplate("standing.txt.sbn", "{{ trial }} after {{ rounds_recorded }} of {{ rounds }} rounds; seed {{ seed }}\n{{ for arm in arms }}{{ arm.code }} {{ arm.plots_issued }}\n{{ end }}");
         var run = Trialc.Invoke("status", trial.Design, "--ledger", trial.Ledger, "--template", template);
         Assert.True(run.ExitCode == 0, run.Error);
         Assert.StartsWith("Aphid", run.Out);
