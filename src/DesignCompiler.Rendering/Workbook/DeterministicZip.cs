@@ -4,9 +4,10 @@ namespace DesignCompiler.Rendering.Workbook;
 
 /// <summary>
 /// Rewrites a zip package so that the same content always gives the same bytes. The Open XML
-/// SDK stamps every part with the time it was saved; here every entry gets the zip format's
-/// earliest time (1980-01-01 00:00, APPNOTE 4.4.6), and entries are written in a fixed order:
-/// <c>[Content_Types].xml</c> first, as ECMA-376 Part 2 recommends, then the rest by name.
+/// SDK stamps every part with the time it was saved; here every entry gets the earliest time an
+/// MS-DOS date in a zip header can hold (1980-01-01 00:00), and entries are written in a fixed
+/// order: <c>[Content_Types].xml</c> first, where Office puts it and some readers look for it
+/// (common practice), then <c>_rels/.rels</c>, then the rest by name.
 /// </summary>
 internal static class DeterministicZip
 {

@@ -89,7 +89,7 @@ public sealed class CrewWorkbookTests
     {
         using var round = new CompiledRound("cover-crops.trial");
         using var zip = ZipFile.OpenRead(round.File("xlsx"));
-        // 1980-01-01 is the earliest time a zip entry can hold (PKWARE APPNOTE 4.4.6, MS-DOS date).
+        // 1980-01-01 is the earliest time a zip entry's MS-DOS date can hold (PKWARE APPNOTE, section 4.4.6; from memory).
         Assert.All(zip.Entries, e => Assert.Equal(new DateTime(1980, 1, 1), e.LastWriteTime.DateTime));
         Assert.DoesNotContain(zip.Entries, e => e.FullName.StartsWith("docProps/", StringComparison.Ordinal));
         Assert.Equal("[Content_Types].xml", zip.Entries[0].FullName);
