@@ -7,6 +7,7 @@ public static class BuiltInTemplates
     public const string CrewSheetCsv = "sheet.csv.sbn";
     public const string PlanJson = "plan.json.sbn";
     public const string SummaryMarkdown = "summary.md.sbn";
+    public const string RoundReportHtml = "round-report.html.sbn";
 
     public static string Text(string name)
     {

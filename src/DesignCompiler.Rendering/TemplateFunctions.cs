@@ -9,6 +9,8 @@ namespace DesignCompiler.Rendering;
 /// </summary>
 internal static class TemplateFunctions
 {
+    public static IReadOnlyList<string> Names { get; } = ["csv", "json", "html", "md", "crlf"];
+
     public static void AddTo(ScriptObject globals)
     {
         globals.Import("csv", new Func<object?, string>(Csv));

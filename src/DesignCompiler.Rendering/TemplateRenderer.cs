@@ -1,9 +1,9 @@
-using System.Globalization;
-using System.Reflection;
+using System.Text.RegularExpressions;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Text;
 using Scriban;
 using Scriban.Runtime;
+using Scriban.Syntax;
 
 namespace DesignCompiler.Rendering;
 
@@ -11,64 +11,82 @@ namespace DesignCompiler.Rendering;
 public sealed record RenderResult(string? Text, IReadOnlyList<Diagnostic> Diagnostics);
 
 /// <summary>
-/// Renders Scriban templates against a view model, safely: the template sees only the
-/// model's properties and a few formatting functions, cannot include files (no template
-/// loader), and runs under loop and recursion limits. Output is culture-invariant.
+/// Renders Scriban templates, built-in or the user's own, against a view model in the
+/// <see cref="TemplateSandbox"/>: the template sees only the model's properties and a few
+/// formatting functions. Output is culture-invariant. Every error names the template's file,
+/// line and column, what went wrong and how to fix it.
 /// </summary>
-public static class TemplateRenderer
+public static partial class TemplateRenderer
 {
-    public static readonly DiagnosticDescriptor TemplateError = new("TD6001", Severity.Error, "template error: {0}");
-
     public static RenderResult RenderBuiltIn(string name, object model) =>
         Render(new SourceText("template:" + name, BuiltInTemplates.Text(name)), model);
 
     public static RenderResult Render(SourceText template, object model)
     {
         var parsed = Template.Parse(template.Content, template.Path);
-        if (parsed.HasErrors) return Failed(template, parsed.Messages.Select(m => (m.Span, m.Message)));
+        return parsed.HasErrors ? new RenderResult(null, SyntaxErrors(template, parsed)) : Render(template, parsed, model);
+    }
 
-        var globals = new ScriptObject();
-        globals.Import(model, renamer: StandardMemberRenamer.Default);
-        TemplateFunctions.AddTo(globals);
+    public static RenderResult Render(UserTemplate template, object model) => Render(template.Source, template.Parsed, model);
 
-        var context = new TemplateContext
-        {
-            StrictVariables = true,
-            LoopLimit = 2_000_000,
-            RecursiveLimit = 50,
-            LimitToString = 64 * 1024 * 1024,
-            TemplateLoader = null,
-            EnableRelaxedMemberAccess = false,
-            MemberFilter = member => member is PropertyInfo,
-            NewLine = "\n",
-        };
-        context.PushCulture(CultureInfo.InvariantCulture);
-        context.PushGlobal(globals);
+    private static RenderResult Render(SourceText source, Template parsed, object model)
+    {
+        var context = TemplateSandbox.Context(model);
         try
         {
             return new RenderResult(parsed.Render(context), []);
         }
-        catch (Scriban.Syntax.ScriptRuntimeException e)
+        catch (TemplateRefusal refusal)
         {
-            return Failed(template, [(e.Span, e.OriginalMessage)]);
+            return new RenderResult(null, [At(source, refusal.Span, TemplateDiagnostics.Refused, TemplateDiagnostics.RefusedHint, refusal.Function, refusal.Why)]);
+        }
+        catch (ScriptRuntimeException e)
+        {
+            var hint = NameHint(e.OriginalMessage, model) ?? TemplateDiagnostics.RuntimeHint;
+            return new RenderResult(null, [At(source, e.Span, TemplateDiagnostics.Runtime, hint, Sentence(e.OriginalMessage))]);
         }
     }
 
-    private static RenderResult Failed(SourceText template, IEnumerable<(Scriban.Parsing.SourceSpan Span, string Message)> messages)
+    internal static IReadOnlyList<Diagnostic> SyntaxErrors(SourceText source, Template parsed) =>
+        parsed.Messages.Where(m => m.Type == Scriban.Parsing.ParserMessageType.Error)
+            .Select(m => At(source, m.Span, TemplateDiagnostics.Syntax, TemplateDiagnostics.SyntaxHint, Sentence(m.Message)))
+            .ToList();
+
+    /// <summary>"did you mean 'plot_list'?" when the message names a variable or member that is not in the model.</summary>
+    private static string? NameHint(string message, object model)
     {
-        var diagnostics = messages.Select(m =>
-        {
-            var start = m.Span.Start;
-            var offset = OffsetOf(template, start.Line + 1, start.Column + 1);
-            return new Diagnostic(TemplateError, SourceLocation.In(template, new TextSpan(offset, Math.Max(1, m.Span.End.Offset - m.Span.Start.Offset + 1))), [m.Message]);
-        }).ToList();
-        return new RenderResult(null, diagnostics);
+        var match = MissingName().Match(message);
+        if (!match.Success) return null;
+        var word = match.Groups["name"].Value.TrimEnd('.');
+        var last = word[(word.LastIndexOf('.') + 1)..];
+        return Suggestions.DidYouMean(last, ModelNames.Of(model.GetType()).Concat(TemplateFunctions.Names)) is { } hint
+            ? hint + " A" + TemplateDiagnostics.RuntimeHint[1..]
+            : null;
+    }
+
+    /// <summary>Scriban names a missing variable in backquotes, a missing member after "with name".</summary>
+    [GeneratedRegex(@"`(?<name>[^`]+)` was not found|member with name (?<name>[A-Za-z_][A-Za-z0-9_.]*)", RegexOptions.CultureInvariant)]
+    private static partial Regex MissingName();
+
+    /// <summary>Scriban's messages end with a full stop or not; ours read as one clause.</summary>
+    private static string Sentence(string message) => message.Trim().TrimEnd('.');
+
+    private static Diagnostic At(SourceText source, Scriban.Parsing.SourceSpan span, DiagnosticDescriptor descriptor, string hint, params object[] arguments)
+    {
+        // Scriban counts lines and columns from zero; SourceText maps one-based positions back to offsets.
+        var offset = OffsetOf(source, span.Start.Line + 1, span.Start.Column + 1);
+        var length = Math.Max(1, span.End.Offset - span.Start.Offset + 1);
+        return new Diagnostic(descriptor, SourceLocation.In(source, new TextSpan(offset, Math.Min(length, Math.Max(1, source.Content.Length - offset)))), arguments, hint);
     }
 
     private static int OffsetOf(SourceText text, int line, int column)
     {
         var offset = 0;
-        for (var l = 1; l < line && l <= text.LineCount; l++) offset += text.LineText(l).Length + 1;
+        for (var l = 1; l < line && l <= text.LineCount; l++) offset += text.LineText(l).Length + LineBreakLength(text, offset + text.LineText(l).Length);
         return Math.Min(text.Content.Length, offset + column - 1);
     }
+
+    private static int LineBreakLength(SourceText text, int at) =>
+        at < text.Content.Length && text.Content[at] == '\r' && at + 1 < text.Content.Length && text.Content[at + 1] == '\n' ? 2
+        : at < text.Content.Length ? 1 : 0;
 }

@@ -27,16 +27,26 @@ internal static class LedgerCompile
         Kind Kind, RoundPlan? Plan, IReadOnlyList<(string Name, byte[] Content)> Files, string PlanJson, IReadOnlyList<string> Messages);
 
     public static int Run(CliConsole console, string designPath, CheckedDesign design, RoundPlanner planner,
-        string ledgerPath, string? outDirectory, string format, string? amend, int? round)
+        string ledgerPath, string? outDirectory, string format, string? amend, int? round, IReadOnlyList<UserTemplate> templates)
     {
+        var isNew = !File.Exists(ledgerPath);
         using var ledger = LedgerCommandSupport.Open(console, ledgerPath, create: true);
         if (ledger is null) return ExitCodes.InputErrors;
 
         var stem = Path.GetFileNameWithoutExtension(designPath);
         var result = ledger.Update(LedgerCommandSupport.Actor(),
-            (history, appender) => Decide(design, planner, history, appender, stem, amend, round));
+            (history, appender) => Decide(design, planner, history, appender, stem, amend, round, templates));
         console.Report(result.Diagnostics);
-        if (result.HasErrors || result.Value is not { } outcome) return ExitCodes.InputErrors;
+        if (result.HasErrors || result.Value is not { } outcome)
+        {
+            // A ledger this command created holds nothing after a failed first round: take it away again, so nothing is left behind.
+            if (isNew)
+            {
+                ledger.Dispose();
+                DiscardEmptyLedger(ledgerPath);
+            }
+            return ExitCodes.InputErrors;
+        }
 
         // With --format json standard output carries the plan alone, so the messages go beside it.
         var messages = format == "json" && outcome.Plan is not null ? console.Error : console.Out;
@@ -61,7 +71,7 @@ internal static class LedgerCompile
     }
 
     private static LedgerResult<Outcome> Decide(CheckedDesign design, RoundPlanner planner, LedgerHistory history, LedgerAppender appender,
-        string stem, string? amend, int? round)
+        string stem, string? amend, int? round, IReadOnlyList<UserTemplate> templates)
     {
         var warnings = new List<Diagnostic>();
         var messages = new List<string>();
@@ -90,7 +100,7 @@ internal static class LedgerCompile
             if (round is not null && round != open.Round)
                 return Fail(new Diagnostic(LedgerDiagnostics.RoundNotNext, location,
                     [round, FormattableString.Invariant($"round {open.Round} is issued and awaits its results")]));
-            return Reissue(history, open, design, stem, messages, warnings);
+            return Reissue(history, open, design, stem, messages, warnings, templates);
         }
 
         var next = (history.LastRound?.Round ?? 0) + 1;
@@ -120,7 +130,9 @@ internal static class LedgerCompile
         }
 
         var json = RoundOutputs.Json(plan, design);
-        var (files, problems) = RoundOutputs.Render(plan, design, stem, appender.Actor.AtText[..10]);
+        var figures = RoundFigures.FromLedger(design, history, next);
+        if (figures.Value is null) return Fail(figures.Diagnostics);
+        var (files, problems) = RoundOutputs.Render(plan, design, stem, appender.Actor.AtText[..10], figures.Value, templates);
         if (problems.Any(d => d.Severity == Severity.Error)) return Fail(problems);
         var issuedEntry = appender.Issue(design, plan, json);
         messages.Add(FormattableString.Invariant($"issued round {next} into the ledger as entry {issuedEntry.Seq} ({issuedEntry.At} by {issuedEntry.User})"));
@@ -129,17 +141,34 @@ internal static class LedgerCompile
 
     /// <summary>The round awaiting results, rendered again from its stored plan and design text, with its JSON exactly as stored.</summary>
     private static LedgerResult<Outcome> Reissue(LedgerHistory history, IssuedRound open, CheckedDesign design, string stem,
-        List<string> messages, List<Diagnostic> warnings)
+        List<string> messages, List<Diagnostic> warnings, IReadOnlyList<UserTemplate> templates)
     {
         var issuedUnder = StoredDesign.Bind(history, open.Entry.DesignHash, design.Source.Path) ?? design;
         var plan = open.ReadPlan();
-        var (files, problems) = RoundOutputs.Render(plan, issuedUnder, stem, open.Entry.Date);
+        var figures = RoundFigures.FromLedger(issuedUnder, history, open.Round);
+        if (figures.Value is null) return Fail(figures.Diagnostics);
+        var (files, problems) = RoundOutputs.Render(plan, issuedUnder, stem, open.Entry.Date, figures.Value, templates);
         if (problems.Any(d => d.Severity == Severity.Error)) return Fail(problems);
         var jsonName = FormattableString.Invariant($"{stem}-round{open.Round}.json");
         var stored = files.Select(f => f.Name == jsonName ? (f.Name, new System.Text.UTF8Encoding(false).GetBytes(open.PlanJson)) : f).ToList();
         messages.Add(FormattableString.Invariant(
             $"round {open.Round} was issued on {open.Entry.Date} by {open.Entry.User} and awaits results for {open.Plots.Count} plots; its sheets are issued again unchanged"));
         return LedgerResult<Outcome>.Ok(new Outcome(Kind.Reissued, plan, stored, open.PlanJson, messages), warnings);
+    }
+
+    private static void DiscardEmptyLedger(string path)
+    {
+        try
+        {
+            File.Delete(path);
+        }
+        catch (IOException)
+        {
+            // An empty ledger left behind is harmless: the next compile starts round 1 in it.
+        }
+        catch (UnauthorizedAccessException)
+        {
+        }
     }
 
     private static string Since(LedgerHistory history)

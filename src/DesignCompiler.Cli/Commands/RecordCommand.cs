@@ -6,16 +6,17 @@ using DesignCompiler.Results;
 namespace DesignCompiler.Cli.Commands;
 
 /// <summary>
-/// <c>trialc record DESIGN --ledger L RESULTS.csv</c>: takes a returned crew sheet into the
-/// ledger if, and only if, it matches an issued round in every plot; otherwise lists every
-/// problem with its line and column and leaves the ledger as it was.
+/// <c>trialc record DESIGN --ledger L RESULTS</c>: takes a returned crew sheet (the CSV or the
+/// .xlsx workbook) into the ledger if, and only if, it matches an issued round in every plot;
+/// otherwise lists every problem with its line and column (sheet and cell for a workbook) and
+/// leaves the ledger as it was.
 /// </summary>
 internal static class RecordCommand
 {
     public static Command Create(CliConsole console)
     {
         var design = new Argument<string>("DESIGN") { Description = "The design file (*.trial) the trial runs under." };
-        var results = new Argument<string>("RESULTS") { Description = "The returned crew sheet (CSV) with the outcomes filled in." };
+        var results = new Argument<string>("RESULTS") { Description = "The returned crew sheet, CSV or .xlsx workbook, with the outcomes filled in." };
         var ledger = new Option<string?>("--ledger") { Description = "The trial's ledger (default: beside the design, extension .ledger)." };
         var command = new Command("record", "Record a returned sheet's outcomes in the trial's ledger.");
         command.Arguments.Add(design);
@@ -29,10 +30,10 @@ internal static class RecordCommand
     {
         var (checkedDesign, diagnostics) = DesignLoader.Load(designPath);
         if (console.Report(diagnostics) || checkedDesign is null) return ExitCodes.InputErrors;
-        var (file, problem) = ResultFile.Read(resultsPath);
+        var (file, problems) = ResultFile.Read(resultsPath);
         if (file is null)
         {
-            console.Report([problem!]);
+            console.Report(problems);
             return ExitCodes.InputErrors;
         }
 

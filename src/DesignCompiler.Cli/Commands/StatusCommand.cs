@@ -2,6 +2,7 @@ using System.CommandLine;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Ledger;
 using DesignCompiler.Planning;
+using DesignCompiler.Rendering;
 using DesignCompiler.Rendering.Status;
 
 namespace DesignCompiler.Cli.Commands;
@@ -24,19 +25,32 @@ internal static class StatusCommand
         };
         format.AcceptOnlyFromAmong([.. StatusOutputs.Formats]);
         var output = new Option<string?>("--out") { Description = "Write to this file instead of standard output." };
+        var template = new Option<string?>("--template")
+        {
+            Description = "A Scriban template of your own (FILE.sbn) to render the status with, in place of --format (docs/templates.md).",
+        };
         var command = new Command("status", "Show where a trial stands, from its ledger.");
         command.Arguments.Add(design);
         command.Options.Add(ledger);
         command.Options.Add(format);
         command.Options.Add(output);
-        command.SetAction(parse => Run(console, parse.GetValue(design)!, parse.GetValue(ledger), parse.GetValue(format)!, parse.GetValue(output)));
+        command.Options.Add(template);
+        command.SetAction(parse => Run(console, parse.GetValue(design)!, parse.GetValue(ledger), parse.GetValue(format)!, parse.GetValue(output),
+            parse.GetValue(template)));
         return command;
     }
 
-    private static int Run(CliConsole console, string designPath, string? ledgerPath, string format, string? outPath)
+    private static int Run(CliConsole console, string designPath, string? ledgerPath, string format, string? outPath, string? templatePath)
     {
         var (checkedDesign, diagnostics) = DesignLoader.Load(designPath);
         if (console.Report(diagnostics) || checkedDesign is null) return ExitCodes.InputErrors;
+        UserTemplate? template = null;
+        if (templatePath is not null)
+        {
+            var (loaded, problems) = UserTemplate.Load(templatePath);
+            if (console.Report(problems) || loaded is null) return ExitCodes.InputErrors;
+            template = loaded;
+        }
         var (planner, problem) = RoundPlanner.For(checkedDesign);
         if (planner is null)
         {
@@ -58,7 +72,7 @@ internal static class StatusCommand
 
         var status = TrialStatusBuilder.Build(planner, history);
         if (console.Report(status.Diagnostics) || status.Value is null) return ExitCodes.InputErrors;
-        var rendered = StatusOutputs.Render(status.Value, format);
+        var rendered = template is null ? StatusOutputs.Render(status.Value, format) : StatusOutputs.Render(status.Value, template);
         if (console.Report(rendered.Diagnostics) || rendered.Text is null) return ExitCodes.InputErrors;
         return LedgerCommandSupport.WriteOutput(console, outPath, rendered.Text) ? ExitCodes.Ok : ExitCodes.InputErrors;
     }

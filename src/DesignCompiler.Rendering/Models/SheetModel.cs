@@ -1,9 +1,12 @@
+using DesignCompiler.Rendering.Charts;
+using DesignCompiler.Rendering.Status;
+
 namespace DesignCompiler.Rendering.Models;
 
 /// <summary>
 /// What a round's templates can see, and nothing else. Numbers come both as exact text
-/// (for JSON and CSV) and as rounded text (for people); templates never compute.
-/// Every field is listed in docs/template-model.md.
+/// (for JSON and CSV) and as rounded text (for people); templates never compute. Charts come
+/// laid out, as SVG coordinates in text. Every field is listed in docs/templates.md.
 /// </summary>
 public sealed record SheetModel(
     string Trial,
@@ -25,7 +28,10 @@ public sealed record SheetModel(
     string ProbabilityBestErrorBound,
     string Caution,
     IReadOnlyList<ArmModel> Arms,
-    IReadOnlyList<BlockModel> Blocks);
+    IReadOnlyList<BlockModel> Blocks,
+    IReadOnlyList<StatusRoundModel> History,
+    LineChartModel? ProbabilityBestChart,
+    DensityChartModel? DensityChart);
 
 /// <summary>One arm: code, label, plots this round, and the posterior figures exact and rounded.</summary>
 public sealed record ArmModel(

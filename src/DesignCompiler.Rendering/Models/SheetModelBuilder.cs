@@ -1,5 +1,8 @@
 using DesignCompiler.Binding;
+using DesignCompiler.Ledger;
 using DesignCompiler.Planning;
+using DesignCompiler.Rendering.Charts;
+using DesignCompiler.Rendering.Status;
 
 namespace DesignCompiler.Rendering.Models;
 
@@ -11,16 +14,30 @@ public static class SheetModelBuilder
         "Caution: apply every treatment following its product label, local regulations and qualified agronomic advice. " +
         "Wear the protective equipment the label requires, and keep people and animals out of treated plots for the time it states.";
 
-    public static SheetModel Build(RoundPlan plan, CheckedDesign design, string toolVersion, string? dateIssued = null)
+    /// <summary>The model of a round; <paramref name="figures"/> (the report's charts) may be left out only for the plan JSON.</summary>
+    public static SheetModel Build(RoundPlan plan, CheckedDesign design, string toolVersion, string? dateIssued = null, RoundFigures? figures = null)
     {
         var arms = plan.Arms.Select(Arm).ToList();
         var blocks = plan.Blocks.Select((b, j) => Block(plan, b, j, design)).ToList();
+        var codes = plan.Arms.Select(a => a.Code).ToList();
+        var history = figures?.History.Select(StatusModelBuilder.HistoryRow).ToList() ?? [];
         return new SheetModel(
             plan.Trial, plan.Round, plan.Rounds, plan.DesignHash, plan.DesignHash[..12],
             plan.Seed.ToString(System.Globalization.CultureInfo.InvariantCulture), toolVersion, plan.Policy,
             plan.OutcomeName, plan.OutcomeUnit ?? "", plan.OutcomeFamily, OutcomeValues(design.Outcome), plan.ValueUnit ?? "",
-            dateIssued ?? "", plan.Plots, plan.PlotsRecorded, NumberText.Exact(plan.ProbabilityBestErrorBound), Caution, arms, blocks);
+            dateIssued ?? "", plan.Plots, plan.PlotsRecorded, NumberText.Exact(plan.ProbabilityBestErrorBound), Caution, arms, blocks,
+            history,
+            figures is null ? null : ProbabilityBestChartLayout.Layout(plan.Rounds, codes, figures.History),
+            figures is null ? null : DensityChartLayout.Layout(figures.Curves, arms, DensityAxis(design.Outcome)));
     }
+
+    /// <summary>What the density chart's x axis measures: the arm's mean outcome, in the outcome's words.</summary>
+    public static string DensityAxis(OutcomeSpec outcome) => outcome.Family switch
+    {
+        OutcomeFamily.Bernoulli => $"{outcome.Name}: chance per plot",
+        OutcomeFamily.Binomial => FormattableString.Invariant($"{outcome.Name}: chance for each of the {outcome.Trials} per plot"),
+        _ => "mean " + outcome.Name + " per plot" + (outcome.Unit is null ? "" : " (" + outcome.Unit + ")"),
+    };
 
     /// <summary>What a crew may write in the outcome column, in words.</summary>
     public static string OutcomeValues(OutcomeSpec outcome) => outcome.Family switch

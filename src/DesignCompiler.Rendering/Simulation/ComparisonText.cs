@@ -8,7 +8,7 @@ public static class ComparisonText
     public static string Write(ComparisonModel model)
     {
         var o = new StringBuilder();
-        o.Append($"Comparison with common random numbers, {model.Replications} paired replications per scenario, seed {model.Seed}\n");
+        o.Append($"Comparison with common random numbers, {model.Replications} paired replications per scenario, seed {model.Seed}, trialc {model.ToolVersion}\n");
         Side(o, "A", model.A);
         Side(o, "B", model.B);
         o.Append($"margin {model.MarginRule}\n");

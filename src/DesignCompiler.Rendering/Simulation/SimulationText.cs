@@ -9,7 +9,7 @@ public static class SimulationText
     {
         var o = new StringBuilder();
         o.Append($"{model.Trial}: simulated with policy {model.Policy}, {model.Replications} replications per scenario, seed {model.Seed}\n");
-        o.Append($"design {model.DesignHashShort}; {model.Rounds} rounds of {model.PlotsPerRound} plots; values in {Unit(model.ValueUnit)} per plot\n");
+        o.Append($"design {model.DesignHashShort}; {model.Rounds} rounds of {model.PlotsPerRound} plots; values in {Unit(model.ValueUnit)} per plot; trialc {model.ToolVersion}\n");
         o.Append($"margin {model.MarginRule}\n");
         if (model.CutShort) o.Append("*** ").Append(model.CutShortText).Append(" ***\n");
         foreach (var s in model.Scenarios) Scenario(o, s);

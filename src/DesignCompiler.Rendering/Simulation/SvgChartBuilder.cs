@@ -111,7 +111,7 @@ public static class SvgChartBuilder
     }
 
     /// <summary>Ticks at 1, 2 or 5 times a power of ten, about five of them, covering the range.</summary>
-    private static (double[] Ticks, double Step) NiceTicks(double low, double high)
+    internal static (double[] Ticks, double Step) NiceTicks(double low, double high)
     {
         var raw = (high - low) / 5;
         var power = Math.Pow(10, Math.Floor(Math.Log10(raw)));
@@ -122,7 +122,7 @@ public static class SvgChartBuilder
         return (Enumerable.Range(0, count).Select(k => first + k * step).ToArray(), step);
     }
 
-    private static string TickText(double value, double step)
+    internal static string TickText(double value, double step)
     {
         var decimals = Math.Max(0, -(int)Math.Floor(Math.Log10(step) + 1e-9));
         return FigureText.Fixed(value, decimals);

@@ -23,7 +23,7 @@ public sealed class DiagnosticBag
         _items
             .Select((d, i) => (d, i))
             .OrderBy(x => x.d.Location.Path, StringComparer.Ordinal)
-            .ThenBy(x => x.d.Location.Span.Start)
+            .ThenBy(x => x.d.Location.Order)
             .ThenBy(x => x.i)
             .Select(x => x.d)
             .ToList();

@@ -4,7 +4,8 @@ using System.Text;
 namespace DesignCompiler.Diagnostics;
 
 /// <summary>
-/// Renders diagnostics the way compilers do: <c>file:line:col: error TD2011: message</c>,
+/// Renders diagnostics the way compilers do: <c>file:line:col: error TD2011: message</c>
+/// (<c>file:sheet!cell: …</c> for a workbook),
 /// then the source line with carets under the span, then the hint and related notes.
 /// </summary>
 public static class DiagnosticFormatter
@@ -45,6 +46,10 @@ public static class DiagnosticFormatter
         {
             var start = location.Start;
             builder.Append(CultureInfo.InvariantCulture, $":{start.Line}:{start.Column}");
+        }
+        else if (location.Cell is { } cell)
+        {
+            builder.Append(':').Append(cell.Text);
         }
         builder.Append(": ").Append(text).Append('\n');
     }

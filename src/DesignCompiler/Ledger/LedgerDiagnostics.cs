@@ -15,6 +15,9 @@ public static class LedgerDiagnostics
     // --- TD40xx: result sheets ---------------------------------------------------
     public static readonly DiagnosticDescriptor ResultsUnreadable = Error("TD4001", "cannot read the results: {0}");
     public static readonly DiagnosticDescriptor NotText = Error("TD4002", "the file is not a CSV text sheet: {0}");
+    public static readonly DiagnosticDescriptor NotAWorkbook = Error("TD4030", "the file is not a workbook trialc can read: {0}");
+    public static readonly DiagnosticDescriptor NoHeaderRow = Error("TD4031", "sheet '{0}' has cells filled in but no header row; its plot table starts with a row '{1}'");
+    public static readonly DiagnosticDescriptor DateInOutcome = Error("TD4032", "outcome of plot '{0}' is formatted as a date or time, so the spreadsheet changed what was typed; format the column as General and write {1}");
     public static readonly DiagnosticDescriptor EmptySheet = Error("TD4003", "the file is empty; a results sheet starts with the header '{0}'");
     public static readonly DiagnosticDescriptor HeaderMismatch = Error("TD4004", "{0}");
     public static readonly DiagnosticDescriptor CsvMalformed = Error("TD4005", "{0}");
@@ -29,7 +32,7 @@ public static class LedgerDiagnostics
     public static readonly DiagnosticDescriptor UnknownPlot = Error("TD4015", "plot '{0}' was not issued in round {1}");
     public static readonly DiagnosticDescriptor WrongArm = Error("TD4016", "plot '{0}' was issued with arm '{1}' in round {2}, not '{3}'");
     public static readonly DiagnosticDescriptor WrongPlace = Error("TD4017", "plot '{0}' has {1} '{2}' on the issued sheet, not '{3}'");
-    public static readonly DiagnosticDescriptor DuplicatePlot = Error("TD4018", "plot '{0}' appears twice; its first row is line {1}");
+    public static readonly DiagnosticDescriptor DuplicatePlot = Error("TD4018", "plot '{0}' appears twice; its first row is {1}");
     public static readonly DiagnosticDescriptor MissingPlot = Error("TD4019", "plot '{0}' (arm '{1}') of round {2} has no row in the file");
     public static readonly DiagnosticDescriptor BlankOutcome = Error("TD4020", "plot '{0}' has no outcome; write {1}, or 'missing: reason'");
     public static readonly DiagnosticDescriptor NotANumber = Error("TD4021", "outcome '{0}' is not a number; write {1}, or 'missing: reason'");

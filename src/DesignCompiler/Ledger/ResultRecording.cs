@@ -3,7 +3,6 @@ using DesignCompiler.Binding;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Planning.Families;
 using DesignCompiler.Results;
-using DesignCompiler.Text;
 
 namespace DesignCompiler.Ledger;
 
@@ -24,17 +23,16 @@ public static class ResultRecording
         if (history.RecordingOfFile(sha) is { } earlier)
         {
             var round = history.Rounds.First(r => r.Recording == earlier).Round;
-            return Fail(new Diagnostic(LedgerDiagnostics.FileAlreadyRecorded, SourceLocation.In(file.Text, new TextSpan(0, 0)),
-                [round, earlier.Entry.Describe()]));
+            return Fail(new Diagnostic(LedgerDiagnostics.FileAlreadyRecorded, file.Table.Whole, [round, earlier.Entry.Describe()]));
         }
 
         var issued = history.Rounds.Select(r => new IssuedSheet(r.Round,
             r.Plots.Select((p, k) => new IssuedPlot(k, p.Block, p.PlotId, p.Row, p.Column, p.ArmCode)).ToList(),
             r.Recording?.Entry.Describe())).ToList();
-        var (sheet, problems) = ResultSheetChecker.Check(file.Text, issued, design.Outcome, OutcomeModels.For(design.Outcome));
+        var (sheet, problems) = ResultSheetChecker.Check(file.Table, issued, design.Outcome, OutcomeModels.For(design.Outcome));
         if (sheet is null) return Fail(problems);
 
-        var entry = appender.Record(sheet, Path.GetFileName(file.Text.Path), sha, design.Hash);
+        var entry = appender.Record(sheet, Path.GetFileName(file.Path), sha, design.Hash);
         return LedgerResult<RecordedSheet>.Ok(new RecordedSheet(entry, sheet));
     }
 

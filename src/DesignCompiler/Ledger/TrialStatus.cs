@@ -27,7 +27,8 @@ public sealed record TrialStatus(
     IReadOnlyList<RoundPoint> History,
     IReadOnlyList<Amendment> Amendments,
     NextStep Next,
-    string HeadHash);
+    string HeadHash,
+    ulong Seed);
 
 /// <summary>
 /// One arm now. Mean and interval are of the arm's mean outcome; P(best) and expected loss

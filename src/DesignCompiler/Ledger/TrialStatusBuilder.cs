@@ -23,7 +23,7 @@ public static class TrialStatusBuilder
         var now = TrialReplay.Now(design, history);
         if (now.Value is not { } state) return LedgerResult<TrialStatus>.Fail(now.Diagnostics);
 
-        var (posteriors, summary) = Assess(planner, state);
+        var (posteriors, summary) = ArmAssessment.Of(design, planner.Model, state);
         var last = history.LastRound?.ReadPlan();
         var arms = design.Arms.Select(arm =>
         {
@@ -36,13 +36,8 @@ public static class TrialStatusBuilder
                 posteriors[i].Mean, interval.Lower, interval.Upper, summary.ProbabilityBest[i], summary.ExpectedLoss[i]);
         }).ToList();
 
-        var points = new List<RoundPoint>();
-        for (var k = 0; k <= history.RecordedRounds; k++)
-        {
-            var after = TrialReplay.AfterRecorded(design, history, k);
-            if (after.Value is null) return LedgerResult<TrialStatus>.Fail(after.Diagnostics);
-            points.Add(new RoundPoint(k, Assess(planner, after.Value).Summary.ProbabilityBest.ToList()));
-        }
+        var points = ProbabilityBestHistory.Of(design, planner.Model, history, history.RecordedRounds);
+        if (points.Value is null) return LedgerResult<TrialStatus>.Fail(points.Diagnostics);
 
         var stocks = design.Stocks.Select(s => new StockStanding(design.Arms[s.Arm].Code, s.Plots, state.PlotsIssued[s.Arm],
             Math.Max(0, s.Plots - state.PlotsIssued[s.Arm]))).ToList();
@@ -55,15 +50,7 @@ public static class TrialStatusBuilder
             design.Outcome.Name, design.Outcome.Unit, design.Outcome.FamilyText,
             design.Valuation.HasPrice ? design.Valuation.Currency ?? "money" : design.Outcome.Unit,
             design.Valuation.Goal == Goal.Minimize,
-            arms, Rules(design, state, summary), stocks, points, history.Amendments, Next(planner, history, state), history.HeadHash));
-    }
-
-    /// <summary>The planner's own belief, among the arms still in the trial.</summary>
-    private static (IMarginal[] Posteriors, BestArmSummary Summary) Assess(RoundPlanner planner, TrialState state)
-    {
-        var belief = planner.Believe(state);
-        var inTrial = Enumerable.Range(0, state.Dropped.Length).Where(i => !state.Dropped[i]).ToList();
-        return (belief.Posteriors, belief.Summarize(inTrial));
+            arms, Rules(design, state, summary), stocks, points.Value, history.Amendments, Next(planner, history, state), history.HeadHash, design.Seed));
     }
 
     private static List<RuleStanding> Rules(CheckedDesign design, TrialState state, BestArmSummary summary)

@@ -6,64 +6,80 @@ using DesignCompiler.Text;
 
 namespace DesignCompiler.Results;
 
-/// <summary>A returned sheet as text, with its bytes (their hash tells a file already recorded).</summary>
-public sealed record ResultFileText(SourceText Text, byte[] Bytes);
+/// <summary>
+/// A returned sheet as read: its path, its bytes (their hash tells a file already recorded) and
+/// its table, whether it came back as CSV text or as a workbook.
+/// </summary>
+public sealed record ResultFileText(string Path, byte[] Bytes, SheetTable Table);
 
 /// <summary>
-/// Reads a returned sheet. Every way the file can be wrong becomes one diagnostic with a line and
-/// column (1:1 when the file as a whole is wrong), never an exception: sheets come back from
-/// spreadsheets, phones and e-mail, and some are not what they claim to be.
+/// Reads a returned sheet, a CSV file or an .xlsx workbook, told apart by content rather than by
+/// name (a workbook renamed to .csv is still read as one). Every way the file can be wrong becomes
+/// a diagnostic with its place (1:1 when the file as a whole is wrong), never an exception: sheets
+/// come back from spreadsheets, phones and e-mail, and some are not what they claim to be.
 /// </summary>
 public static class ResultFile
 {
     /// <summary>Far above any real sheet (a 10 000-plot round is under 1 MB); anything larger is the wrong file.</summary>
     public const long MaxBytes = 64L * 1024 * 1024;
 
-    public static (ResultFileText? File, Diagnostic? Problem) Read(string path)
+    public static (ResultFileText? File, IReadOnlyList<Diagnostic> Problems) Read(string path)
     {
         byte[] bytes;
         try
         {
-            if (Directory.Exists(path)) return (null, Unreadable(path, "it is a directory, not a file"));
+            if (Directory.Exists(path)) return Failed(Unreadable(path, "it is a directory, not a file"));
             var info = new FileInfo(path);
-            if (!info.Exists) return (null, Unreadable(path, "no such file"));
+            if (!info.Exists) return Failed(Unreadable(path, "no such file"));
             if (info.Length > MaxBytes)
-                return (null, Unreadable(path, FormattableString.Invariant($"it is {info.Length:N0} bytes; a results sheet is far smaller")));
+                return Failed(Unreadable(path, FormattableString.Invariant($"it is {info.Length:N0} bytes; a results sheet is far smaller")));
             bytes = File.ReadAllBytes(path);
         }
         catch (UnauthorizedAccessException)
         {
-            return (null, Unreadable(path, "permission denied"));
+            return Failed(Unreadable(path, "permission denied"));
         }
         catch (IOException e)
         {
-            return (null, Unreadable(path, e.Message));
+            return Failed(Unreadable(path, e.Message));
         }
         return Decode(path, bytes);
     }
 
-    public static (ResultFileText? File, Diagnostic? Problem) Decode(string path, byte[] bytes)
+    public static (ResultFileText? File, IReadOnlyList<Diagnostic> Problems) Decode(string path, byte[] bytes)
     {
+        if (XlsxSheet.LooksLikeZip(bytes))
+        {
+            var (workbook, problems) = XlsxSheet.Read(path, bytes);
+            return workbook is null ? (null, problems) : (new ResultFileText(path, bytes, workbook), []);
+        }
+
         var empty = new SourceText(path, "");
+        if (XlsxSheet.LooksLikeLegacyOffice(bytes))
+            return Failed(At(empty, 0, LedgerDiagnostics.NotAWorkbook,
+                "it is an old-format (.xls) or password-protected workbook; save it as an .xlsx workbook without a password, or as 'CSV UTF-8'"));
         if (bytes.Length >= 2 && (bytes[0] == 0xFF && bytes[1] == 0xFE || bytes[0] == 0xFE && bytes[1] == 0xFF))
-            return (null, At(empty, 0, LedgerDiagnostics.NotText, "it is UTF-16 text; save the sheet as 'CSV UTF-8'"));
+            return Failed(At(empty, 0, LedgerDiagnostics.NotText, "it is UTF-16 text; save the sheet as 'CSV UTF-8'"));
         if (Array.IndexOf(bytes, (byte)0) >= 0)
-            return (null, At(empty, 0, LedgerDiagnostics.NotText, "it holds binary data, not text; return the CSV sheet"));
+            return Failed(At(empty, 0, LedgerDiagnostics.NotText, "it holds binary data, not text; return the CSV sheet or the .xlsx workbook"));
 
         var invalid = FirstInvalidUtf8(bytes);
         if (invalid >= 0)
         {
             // Report where the bad byte is: the text before it is valid, so it can be mapped to a line and column.
             var prefix = new SourceText(path, Encoding.UTF8.GetString(bytes, 0, invalid));
-            return (null, At(prefix, prefix.Content.Length, LedgerDiagnostics.NotText,
+            return Failed(At(prefix, prefix.Content.Length, LedgerDiagnostics.NotText,
                 "it is not UTF-8 text from here on; save the sheet as 'CSV UTF-8'"));
         }
 
         var text = new SourceText(path, Encoding.UTF8.GetString(bytes));
         if (text.Content.Trim().Length == 0)
-            return (null, At(text, 0, LedgerDiagnostics.EmptySheet, SheetColumns.Header));
-        return (new ResultFileText(text, bytes), null);
+            return Failed(At(text, 0, LedgerDiagnostics.EmptySheet, SheetColumns.Header));
+        var (table, csvProblems) = CsvSheet.Read(text);
+        return table is null ? (null, csvProblems) : (new ResultFileText(path, bytes, table), []);
     }
+
+    private static (ResultFileText?, IReadOnlyList<Diagnostic>) Failed(Diagnostic problem) => (null, [problem]);
 
     private static int FirstInvalidUtf8(byte[] bytes)
     {

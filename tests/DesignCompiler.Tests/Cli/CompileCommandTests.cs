@@ -17,17 +17,19 @@ public sealed class CompileCommandTests
         {
             var run = Trialc.Invoke("compile", RepoPaths.Example("cover-crops.trial"), "--out", dir);
             Assert.Equal(0, run.ExitCode);
-            foreach (var ext in new[] { "csv", "html", "json", "md" })
+            foreach (var ext in new[] { "csv", "html", "json", "md", "xlsx" })
                 Assert.True(File.Exists(Path.Combine(dir, "cover-crops-round1." + ext)), ext);
             Assert.Empty(Directory.GetFiles(dir, ".*partial*"));
 
             var csv = File.ReadAllText(Path.Combine(dir, "cover-crops-round1.csv"));
             var lines = csv.Split("\r\n", StringSplitOptions.RemoveEmptyEntries);
-            Assert.Equal("round,block,plot,row,column,arm,label,outcome,notes", lines[0]);
-            Assert.Equal(37, lines.Length);
-            Assert.StartsWith("1,north,north-1-1,1,1,", lines[1]);
+            // A '#' line traces the sheet; 'trialc record' skips it.
+            Assert.Matches("^# Late-sown cover mixes; round 1 of 4; design [0-9a-f]{12}; seed 20260815; policy thompson; trialc \\d+\\.\\d+\\.\\d+$", lines[0]);
+            Assert.Equal("round,block,plot,row,column,arm,label,outcome,notes", lines[1]);
+            Assert.Equal(38, lines.Length);
+            Assert.StartsWith("1,north,north-1-1,1,1,", lines[2]);
             // RFC 4180: a field with a comma is quoted; this label has none, so it stands bare.
-            Assert.All(lines.Skip(1), l => Assert.EndsWith(",,", l));
+            Assert.All(lines.Skip(2), l => Assert.EndsWith(",,", l));
 
             var html = File.ReadAllText(Path.Combine(dir, "cover-crops-round1.html"));
             Assert.Contains("product label, local regulations and qualified agronomic advice", html);
@@ -38,6 +40,39 @@ public sealed class CompileCommandTests
         {
             if (Directory.Exists(dir)) Directory.Delete(dir, true);
         }
+    }
+
+    public static TheoryData<string> Examples() =>
+        [.. Directory.GetFiles(RepoPaths.Examples, "*.trial").Select(f => Path.GetFileName(f)).Order(StringComparer.Ordinal)];
+
+    [Theory]
+    [MemberData(nameof(Examples))]
+    public void Every_example_compiles_to_csv_html_json_markdown_xlsx_and_the_round_report(string example)
+    {
+        var dir = TempDirectory();
+        try
+        {
+            var run = Trialc.Invoke("compile", RepoPaths.Example(example), "--out", dir);
+            Assert.True(run.ExitCode == 0, run.Error);
+            var stem = Path.GetFileNameWithoutExtension(example);
+            var expected = new[] { ".csv", ".html", ".json", ".md", ".xlsx", "-report.html" }.Select(e => $"{stem}-round1{e}").Order(StringComparer.Ordinal);
+            Assert.Equal(expected, Directory.GetFiles(dir).Select(f => Path.GetFileName(f)).Order(StringComparer.Ordinal));
+            Assert.All(Directory.GetFiles(dir), f => Assert.True(new FileInfo(f).Length > 500, f));
+            foreach (var name in expected) Assert.Contains("  wrote " + Path.Combine(dir, name), run.Out);
+        }
+        finally
+        {
+            if (Directory.Exists(dir)) Directory.Delete(dir, true);
+        }
+    }
+
+    [Fact]
+    public void A_template_with_format_json_is_a_usage_error()
+    {
+        var run = Trialc.Invoke("compile", RepoPaths.Example("cover-crops.trial"), "--format", "json", "--template", "x.sbn");
+        Assert.Equal(2, run.ExitCode);
+        Assert.Contains("--template writes a file beside the sheets; give --out DIR instead of --format json", run.Error);
+        Assert.Equal("", run.Out);
     }
 
     [Fact]

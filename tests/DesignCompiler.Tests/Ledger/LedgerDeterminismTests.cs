@@ -37,7 +37,8 @@ public sealed class LedgerDeterminismTests
         }
 
         var files = Directory.GetFiles(invariant).Select(Path.GetFileName).Order(StringComparer.Ordinal).ToList();
-        Assert.Equal(4, files.Count);
+        Assert.Equal(["nitrogen-rates-round2-report.html", "nitrogen-rates-round2.csv", "nitrogen-rates-round2.html", "nitrogen-rates-round2.json",
+            "nitrogen-rates-round2.md", "nitrogen-rates-round2.xlsx"], files);
         foreach (var file in files)
         {
             Assert.Equal(File.ReadAllBytes(Path.Combine(trial.OutFolder(2), file!)), File.ReadAllBytes(Path.Combine(invariant, file!)));

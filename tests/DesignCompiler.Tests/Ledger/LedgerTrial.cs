@@ -50,12 +50,13 @@ public sealed class LedgerTrial : IDisposable
         Assert.True(System.IO.File.Exists(Sheet(round)), run.Out);
     }
 
-    /// <summary>The issued sheet's rows (header first) as fields.</summary>
+    /// <summary>The issued sheet's rows (header first) as fields, without the '#' line that traces the sheet.</summary>
     public List<string[]> SheetRows(int round)
     {
         var (records, problems) = CsvReader.Read(new SourceText("sheet", System.IO.File.ReadAllText(Sheet(round))));
         Assert.Empty(problems);
-        return records.Select(r => r.Fields.Select(f => f.Text).ToArray()).ToList();
+        Assert.StartsWith("# ", records[0].Fields[0].Text);
+        return records.Skip(1).Select(r => r.Fields.Select(f => f.Text).ToArray()).ToList();
     }
 
     /// <summary>Draws one plot's outcome text for an arm from the test's seeded generator.</summary>

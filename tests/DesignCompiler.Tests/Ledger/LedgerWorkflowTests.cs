@@ -32,7 +32,8 @@ public sealed class LedgerWorkflowTests
                 dropped.Add(arm.GetProperty("code").GetString()!);
 
             var sheet = File.ReadAllText(trial.Sheet(round));
-            Assert.StartsWith("round,block,plot,row,column,arm,label,outcome,notes\r\n", sheet);
+            // The trace line names the round and the ledger's issue date; the header follows it.
+            Assert.Matches(@"^# Late-sown cover mixes; round \d of 4; design [0-9a-f]{12}; seed 20260815; policy thompson; trialc [0-9.]+; issued \d{4}-\d{2}-\d{2}\r\nround,block,plot,row,column,arm,label,outcome,notes\r\n", sheet);
             var html = File.ReadAllText(Path.Combine(trial.OutFolder(round), $"cover-crops-round{round}.html"));
             Assert.Matches(@"Date issued: \d{4}-\d{2}-\d{2}<", html);
 

@@ -1,14 +1,14 @@
 using System.Globalization;
 using DesignCompiler.Ledger;
 
-namespace DesignCompiler.Rendering.Status;
+namespace DesignCompiler.Rendering.Charts;
 
 /// <summary>
 /// Lays out the P(best) chart: scales probabilities and rounds to SVG coordinates, gives each
 /// arm a dash pattern and a marker shape (so it reads in black and white), and spreads the line
-/// labels apart so arms that end level stay legible. Layout only: every figure is from the status.
+/// labels apart so arms that end level stay legible. Layout only: every figure is from the ledger.
 /// </summary>
-internal static class StatusChartLayout
+internal static class ProbabilityBestChartLayout
 {
     private const int Width = 780;
     private const int Height = 330;
@@ -19,9 +19,10 @@ internal static class StatusChartLayout
     private const double LabelGap = 13;
 
 
-    public static StatusChartModel Layout(TrialStatus status)
+    /// <summary>The chart for a trial of <paramref name="trialRounds"/> rounds: one line per arm through its P(best) at each point of <paramref name="history"/>.</summary>
+    public static LineChartModel Layout(int trialRounds, IReadOnlyList<string> codes, IReadOnlyList<RoundPoint> history)
     {
-        var rounds = Math.Max(1, status.Rounds);
+        var rounds = Math.Max(1, trialRounds);
         double X(int k) => Left + (Right - Left) * k / rounds;
         double Y(double p) => Bottom - (Bottom - Top) * Math.Clamp(p, 0, 1);
 
@@ -39,23 +40,23 @@ internal static class StatusChartLayout
             new("12", Text(Top - 6), "start", "P(best)"),
         };
 
-        var last = status.History[^1];
-        var labelY = SpreadLabels(status.Arms.Select((_, i) => Y(last.ProbabilityBest[i])).ToList());
-        var series = status.Arms.Select((arm, i) =>
+        var last = history[^1];
+        var labelY = SpreadLabels(codes.Select((_, i) => Y(last.ProbabilityBest[i])).ToList());
+        var series = codes.Select((code, i) =>
         {
-            var points = status.History.Select(h => (X: X(h.RoundsRecorded), Y: Y(h.ProbabilityBest[i]))).ToList();
+            var points = history.Select(h => (X: X(h.RoundsRecorded), Y: Y(h.ProbabilityBest[i]))).ToList();
             var legendY = Top + 10 + i * 16;
             return new ChartSeriesModel(
-                arm.Code,
+                code,
                 string.Join(" ", points.Select(p => Text(p.X) + "," + Text(p.Y))),
                 Dash(i),
                 points.Select(p => Marker(i, p.X, p.Y)).ToList(),
-                new ChartLabelModel(Text(X(last.RoundsRecorded) + 9), Text(labelY[i] + 4), "start", arm.Code),
+                new ChartLabelModel(Text(X(last.RoundsRecorded) + 9), Text(labelY[i] + 4), "start", code),
                 Marker(i, Right + 60, legendY),
-                new ChartLineModel(Text(Right + 44), Text(legendY), Text(Right + 76), Text(legendY), Text(Right + 82), Text(legendY + 4), "start", arm.Code));
+                new ChartLineModel(Text(Right + 44), Text(legendY), Text(Right + 76), Text(legendY), Text(Right + 82), Text(legendY + 4), "start", code));
         }).ToList();
 
-        return new StatusChartModel(Width, Height, Text(Left), Text(Top), Text(Right - Left), Text(Bottom - Top), grid, ticks, labels, series);
+        return new LineChartModel(Width, Height, Text(Left), Text(Top), Text(Right - Left), Text(Bottom - Top), grid, ticks, labels, series);
     }
 
     /// <summary>A dash pattern per arm: solid, dashed, dotted, dash-dot, long dashes, sparse dots, then again.</summary>
@@ -69,7 +70,11 @@ internal static class StatusChartLayout
         _ => "1 6",
     };
 
-    /// <summary>Moves label positions apart to at least <see cref="LabelGap"/> pixels, keeping their order and staying in the plot.</summary>
+    /// <summary>
+    /// Moves label positions apart to at least <see cref="LabelGap"/> pixels, keeping their order and staying in the plot:
+    /// a stack that would run past the bottom axis (many arms level near 0, as before any result) is moved up as a whole,
+    /// so no label sits on the round axis's tick labels.
+    /// </summary>
     private static double[] SpreadLabels(List<double> wanted)
     {
         var order = wanted.Select((y, i) => (y, i)).OrderBy(p => p.y).ThenBy(p => p.i).ToList();
@@ -80,7 +85,7 @@ internal static class StatusChartLayout
             placed[i] = Math.Max(y, previous + LabelGap);
             previous = placed[i];
         }
-        var overflow = previous - (Bottom + 8);
+        var overflow = previous - (Bottom - 4);
         if (overflow > 0)
             foreach (var (_, i) in order) placed[i] -= overflow;
         return placed;
