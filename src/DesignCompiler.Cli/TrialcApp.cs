@@ -22,6 +22,7 @@ public static class TrialcApp
         root.Subcommands.Add(SimulateCommand.Create(console));
         root.Subcommands.Add(CompareCommand.Create(console));
         root.Subcommands.Add(MergeCommand.Create(console));
+        root.Subcommands.Add(AnalyzeCommand.Create(console));
 
         var parsed = root.Parse(args);
         if (parsed.Errors.Count > 0)

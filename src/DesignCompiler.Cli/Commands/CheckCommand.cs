@@ -16,7 +16,7 @@ internal static class CheckCommand
             var (checkedDesign, diagnostics) = DesignLoader.Load(path);
             if (console.Report(diagnostics)) return ExitCodes.InputErrors;
             console.Out.WriteLine(FormattableString.Invariant(
-                $"{path}: ok: trial \"{checkedDesign!.Name}\", {checkedDesign.Arms.Count} arms, {checkedDesign.Rounds} rounds, {checkedDesign.PlotsPerRound} plots per round in {checkedDesign.Blocks.Count} block(s)"));
+                $"{path}: ok: trial \"{checkedDesign!.Name}\", {checkedDesign.Arms.Count} arms, {checkedDesign.Rounds} round{(checkedDesign.Rounds == 1 ? "" : "s")}, {checkedDesign.PlotsPerRound} plots per round in {checkedDesign.Blocks.Count} block{(checkedDesign.Blocks.Count == 1 ? "" : "s")}"));
             return ExitCodes.Ok;
         });
         return command;

@@ -26,6 +26,7 @@ public sealed record SheetModel(
     int Plots,
     int PlotsRecorded,
     string ProbabilityBestErrorBound,
+    string ProbabilityBestAccuracyText,
     string Caution,
     IReadOnlyList<ArmModel> Arms,
     IReadOnlyList<BlockModel> Blocks,

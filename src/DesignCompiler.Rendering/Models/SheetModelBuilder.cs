@@ -25,7 +25,7 @@ public static class SheetModelBuilder
             plan.Trial, plan.Round, plan.Rounds, plan.DesignHash, plan.DesignHash[..12],
             plan.Seed.ToString(System.Globalization.CultureInfo.InvariantCulture), toolVersion, plan.Policy,
             plan.OutcomeName, plan.OutcomeUnit ?? "", plan.OutcomeFamily, OutcomeValues(design.Outcome), plan.ValueUnit ?? "",
-            dateIssued ?? "", plan.Plots, plan.PlotsRecorded, NumberText.Exact(plan.ProbabilityBestErrorBound), Caution, arms, blocks,
+            dateIssued ?? "", plan.Plots, plan.PlotsRecorded, NumberText.Exact(plan.ProbabilityBestErrorBound), AccuracyText(plan.ProbabilityBestErrorBound), Caution, arms, blocks,
             history,
             figures is null ? null : ProbabilityBestChartLayout.Layout(plan.Rounds, codes, figures.History),
             figures is null ? null : DensityChartLayout.Layout(figures.Curves, arms, DensityAxis(design.Outcome)));
@@ -82,4 +82,13 @@ public static class SheetModelBuilder
     }
 
     private static string Text(int? value) => value?.ToString(System.Globalization.CultureInfo.InvariantCulture) ?? "";
+
+    /// <summary>
+    /// How exact the printed P(best) figures are: independent arms are integrated to about 1e-12;
+    /// an adjusted model's correlated arms by a lattice rule whose error estimate is stated.
+    /// </summary>
+    public static string AccuracyText(double bound) =>
+        !double.IsFinite(bound) ? "P(best) figures carry no error bound"
+        : bound <= 1e-9 ? "P(best) figures are exact to the digits shown"
+        : "P(best) figures are computed to within ±" + NumberText.Significant(bound) + " (estimated numerical error)";
 }

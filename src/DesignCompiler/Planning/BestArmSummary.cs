@@ -1,4 +1,5 @@
 using DesignCompiler.Numerics;
+using DesignCompiler.Numerics.Multivariate;
 using DesignCompiler.Syntax;
 
 namespace DesignCompiler.Planning;
@@ -37,7 +38,32 @@ public sealed class BestArmSummary
         if (subset.Count == 0) return new BestArmSummary(probability, loss, 0, 0);
 
         var chosen = subset.Select(i => values[i]).ToList();
-        var result = ProbabilityOfBest.Compute(chosen);
+        return From(ProbabilityOfBest.Compute(chosen), values, subset);
+    }
+
+    /// <summary>
+    /// The same figures when the arms' values are jointly multivariate t (an adjusted model), by
+    /// <see cref="CorrelatedBestArm"/>'s orthant probabilities; its error estimate becomes <see cref="ErrorBound"/>.
+    /// </summary>
+    public static BestArmSummary OfJoint(Joint joint, IReadOnlyList<IMarginal> values, IReadOnlyList<int> subset)
+    {
+        if (subset.Count == 0) return new BestArmSummary(new double[values.Count], new double[values.Count], 0, 0);
+        var k = subset.Count;
+        var location = new double[k];
+        var scale = new double[k, k];
+        for (var a = 0; a < k; a++)
+        {
+            location[a] = joint.Location[subset[a]];
+            for (var b = 0; b < k; b++) scale[a, b] = joint.Scale[subset[a], subset[b]];
+        }
+        return From(CorrelatedBestArm.Compute(location, scale, joint.Df), values, subset);
+    }
+
+    private static BestArmSummary From(BestArmResult result, IReadOnlyList<IMarginal> values, IReadOnlyList<int> subset)
+    {
+        var arms = values.Count;
+        var probability = new double[arms];
+        var loss = new double[arms];
         for (var k = 0; k < subset.Count; k++)
         {
             probability[subset[k]] = result.Probabilities[k];

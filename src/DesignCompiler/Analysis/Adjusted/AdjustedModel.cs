@@ -31,8 +31,8 @@ public static class AdjustedModel
             if (!double.IsFinite(record.Value)) throw new ArgumentException("Every recorded value must be finite.", nameof(records));
         }
 
-        int[] blocks = adjustment == ModelAdjustment.None ? [] : Levels(records, r => r.Block);
-        int[] rounds = adjustment == ModelAdjustment.BlockAndRound ? Levels(records, r => r.Round) : [];
+        int[] blocks = adjustment is ModelAdjustment.Block or ModelAdjustment.BlockAndRound ? Levels(records, r => r.Block) : [];
+        int[] rounds = adjustment is ModelAdjustment.Round or ModelAdjustment.BlockAndRound ? Levels(records, r => r.Round) : [];
         var columns = new ModelColumns(armCount, blocks, rounds);
         var x = columns.DesignMatrix(records);
         var y = records.Select(r => r.Value).ToArray();

@@ -11,4 +11,7 @@ public enum ModelAdjustment
 
     /// <summary>y = μ_arm + α_block + γ_round + ε, block and round effects each summing to zero.</summary>
     BlockAndRound,
+
+    /// <summary>y = μ_arm + γ_round + ε, round effects summing to zero.</summary>
+    Round,
 }

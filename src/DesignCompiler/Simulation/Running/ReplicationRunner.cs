@@ -37,6 +37,9 @@ public sealed class ReplicationRunner
 
     public CheckedDesign Design => _design;
 
+    /// <summary>What the last simulated trial recorded (read it before the next <see cref="Run"/>).</summary>
+    public TrialState State => _state;
+
     public ReplicationRecord NewRecord() => new(_design.Arms.Count, _design.Rounds);
 
     public void Run(ScenarioWorld world, ulong seed, long replication, ReplicationRecord record)
