@@ -86,6 +86,21 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
     void IQuadratureProfile.Evaluate(double x, out double density, out double cdf, out double upperTail) =>
         kernel.Evaluate(x, 1.0 - x, out density, out cdf, out upperTail);
 
+    void IQuadratureProfile.EvaluateMany(ReadOnlySpan<double> x, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> y = stackalloc double[x.Length];
+        for (int j = 0; j < x.Length; j++) y[j] = 1.0 - x[j];
+        kernel.EvaluateMany(x, y, density, cdf, upperTail);
+    }
+
+    void IBoundedProfile.EvaluateNearBoundMany(bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> complement = stackalloc double[distance.Length];
+        for (int j = 0; j < distance.Length; j++) complement[j] = 1.0 - distance[j];
+        if (upper) kernel.EvaluateMany(complement, distance, density, cdf, upperTail);
+        else kernel.EvaluateMany(distance, complement, density, cdf, upperTail);
+    }
+
     void IBoundedProfile.EvaluateNearBound(bool upper, double distance, out double density, out double cdf, out double upperTail)
     {
         if (upper) kernel.Evaluate(1.0 - distance, distance, out density, out cdf, out upperTail);
