@@ -32,23 +32,40 @@ public sealed class BestArmSummary
     public static BestArmSummary Of(IReadOnlyList<IMarginal> values, IReadOnlyList<int> subset)
     {
         var arms = values.Count;
-        var probability = new double[arms];
-        var loss = new double[arms];
-        if (subset.Count == 0) return new BestArmSummary(probability, loss, 0, 0);
+        var buffers = new PlanWorkspace.SummaryBuffers(arms);
+        var indices = subset.ToArray();
+        Compute(values, indices, new MarginalSubset(arms), buffers);
+        return new BestArmSummary(buffers.ProbabilityBest, buffers.ExpectedLoss, buffers.ErrorBound, buffers.Leader);
+    }
 
-        var chosen = subset.Select(i => values[i]).ToList();
-        var result = ProbabilityOfBest.Compute(chosen);
-        for (var k = 0; k < subset.Count; k++)
+    /// <summary>The same into reusable buffers, for the planner's workspace.</summary>
+    internal static void Compute(IReadOnlyList<IMarginal> values, ReadOnlySpan<int> subset, MarginalSubset chosen, PlanWorkspace.SummaryBuffers into)
+    {
+        var arms = values.Count;
+        var probability = into.ProbabilityBest;
+        var loss = into.ExpectedLoss;
+        Array.Clear(probability);
+        Array.Clear(loss);
+        into.ErrorBound = 0;
+        into.Leader = 0;
+        if (subset.Length == 0) return;
+
+        chosen.Fill(values, subset);
+        Span<double> p = stackalloc double[subset.Length];
+        Span<double> l = stackalloc double[subset.Length];
+        var error = ProbabilityOfBest.Compute(chosen, p, l, out var expectedMaximum);
+        for (var k = 0; k < subset.Length; k++)
         {
-            probability[subset[k]] = result.Probabilities[k];
-            loss[subset[k]] = result.ExpectedLoss[k];
+            probability[subset[k]] = p[k];
+            loss[subset[k]] = l[k];
         }
         for (var i = 0; i < arms; i++)
-            if (!subset.Contains(i)) loss[i] = Math.Max(0, result.ExpectedMaximum - values[i].Mean);
+            if (!subset.Contains(i)) loss[i] = Math.Max(0, expectedMaximum - values[i].Mean);
 
         var leader = subset[0];
         foreach (var i in subset)
             if (probability[i] > probability[leader]) leader = i;
-        return new BestArmSummary(probability, loss, result.ErrorBound, leader);
+        into.ErrorBound = error;
+        into.Leader = leader;
     }
 }

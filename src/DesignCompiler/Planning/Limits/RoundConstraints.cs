@@ -28,7 +28,7 @@ public sealed class RoundConstraints
     /// <summary>Cells whose maximum is the number of plots the rotation rules leave for the arm.</summary>
     public bool[,] RotationCapped { get; }
 
-    public int Round { get; }
+    public int Round { get; private set; }
     public bool[] Available { get; }
     public int[] RoundMinimum { get; }
     public int[] RoundMaximum { get; }
@@ -51,12 +51,16 @@ public sealed class RoundConstraints
     /// can never use up the seed that a later minimum needs.
     /// </summary>
     /// <param name="allowedPlots">When rotation rules apply, how many plots of each block may grow each arm this round.</param>
-    public static RoundConstraints Resolve(CheckedDesign design, int round, ReadOnlySpan<int> stockUsed, ReadOnlySpan<bool> dropped, int[,]? allowedPlots = null)
+    /// <param name="reuse">an earlier result for the same design to overwrite instead of allocating a new one (the simulator's hot loop).</param>
+    public static RoundConstraints Resolve(CheckedDesign design, int round, ReadOnlySpan<int> stockUsed, ReadOnlySpan<bool> dropped, int[,]? allowedPlots = null,
+        RoundConstraints? reuse = null)
     {
         var arms = design.Arms.Count;
         var blocks = design.Blocks;
         var total = design.PlotsPerRound;
-        var result = new RoundConstraints(round, arms, blocks.Count);
+        var result = reuse is not null && reuse.Available.Length == arms && reuse.CellMinimum.GetLength(1) == blocks.Count
+            ? reuse.Cleared(round)
+            : new RoundConstraints(round, arms, blocks.Count);
 
         for (var i = 0; i < arms; i++)
         {
@@ -125,6 +129,22 @@ public sealed class RoundConstraints
             result.RoundMaximumSource[i] = maxSource;
         }
         return result;
+    }
+
+    private RoundConstraints Cleared(int round)
+    {
+        Round = round;
+        Array.Clear(Available);
+        Array.Clear(RoundMinimum);
+        Array.Clear(RoundMaximum);
+        Array.Clear(CellMinimum);
+        Array.Clear(CellMaximum);
+        Array.Clear(RoundMinimumSource);
+        Array.Clear(RoundMaximumSource);
+        Array.Clear(CellMinimumSource);
+        Array.Clear(CellMaximumSource);
+        Array.Clear(RotationCapped);
+        return this;
     }
 
     public static bool IsInWindow(CheckedDesign design, int arm, int round)

@@ -21,6 +21,8 @@ public sealed class ReplicationRunner
     private readonly Xoshiro256StarStar[] _armStreams;
     private readonly ulong[] _armKeys;
     private readonly int[] _inTrial;
+    private readonly PlanWorkspace _workspace;
+    private readonly PlanWorkspace _finalWorkspace;
 
     public ReplicationRunner(RoundPlanner planner)
     {
@@ -31,6 +33,8 @@ public sealed class ReplicationRunner
         _armStreams = new Xoshiro256StarStar[arms];
         _armKeys = _design.Arms.Select(a => SimulationStreams.Key(a.Code)).ToArray();
         _inTrial = new int[arms];
+        _workspace = new PlanWorkspace(_design);
+        _finalWorkspace = new PlanWorkspace(_design);
     }
 
     public CheckedDesign Design => _design;
@@ -55,11 +59,12 @@ public sealed class ReplicationRunner
         for (var i = 0; i < arms; i++) _armStreams[i] = SimulationStreams.Outcomes(seed, replication, world.Key, _armKeys[i]);
 
         _state.Reset();
+        var workspace = _workspace;
         for (var round = 1; round <= _design.Rounds; round++)
         {
-            var result = _planner.Plan(_state, round);
-            if (result.Plan is not { } plan)
+            if (!_planner.Decide(_state, round, workspace))
             {
+                var result = _planner.ResultOf(_state, round, workspace);
                 if (result.StopReason is not null) record.Ending = TrialEnding.Stopped;
                 else
                 {
@@ -68,9 +73,9 @@ public sealed class ReplicationRunner
                 }
                 break;
             }
-            if (round > 1) record.LeaderAfterRound[round - 2] = LeaderOf(plan);
-            Sow(plan, round - 1, record);
-            _state.Issue(plan);
+            if (round > 1) record.LeaderAfterRound[round - 2] = LeaderOf(workspace.Summary.ProbabilityBest);
+            Sow(workspace.ArmOfPlot, round - 1, record);
+            _state.Issue(workspace.Totals, workspace.Dropped, workspace.ArmOfPlot);
             _state.RoundsCompleted = round;
             record.RoundsRun = round;
         }
@@ -85,13 +90,12 @@ public sealed class ReplicationRunner
         }
     }
 
-    private void Sow(RoundPlan plan, int roundIndex, ReplicationRecord record)
+    private void Sow(int[] armOfPlot, int roundIndex, ReplicationRecord record)
     {
         var outcome = _design.Outcome;
         var regret = 0.0;
-        foreach (var plot in plan.Assignments)
+        foreach (var arm in armOfPlot)
         {
-            var arm = plot.Arm;
             var y = OutcomeDraw.Draw(outcome, ref _armStreams[arm], record.TrueMean[arm], record.NoiseSd[arm]);
             _state.Record(arm, y);
             record.Plots[arm, roundIndex]++;
@@ -99,15 +103,15 @@ public sealed class ReplicationRunner
             if (!record.IsBest(arm)) record.NonBestPlots++;
         }
         record.RoundRegret[roundIndex] = regret;
-        record.PlotsSown += plan.Assignments.Count;
+        record.PlotsSown += armOfPlot.Length;
     }
 
     /// <summary>The planner's leader: highest P(best), the lowest index among ties (as <see cref="BestArmSummary.Leader"/>).</summary>
-    private static int LeaderOf(RoundPlan plan)
+    private static int LeaderOf(double[] probabilityBest)
     {
         var leader = 0;
-        for (var i = 1; i < plan.Arms.Count; i++)
-            if (plan.Arms[i].ProbabilityBest > plan.Arms[leader].ProbabilityBest) leader = i;
+        for (var i = 1; i < probabilityBest.Length; i++)
+            if (probabilityBest[i] > probabilityBest[leader]) leader = i;
         return leader;
     }
 
@@ -120,16 +124,18 @@ public sealed class ReplicationRunner
     {
         var arms = _design.Arms.Count;
         var model = _planner.Model;
-        var values = new IMarginal[arms];
+        var ws = _finalWorkspace;
         var count = 0;
         for (var i = 0; i < arms; i++)
         {
             var arm = _design.Arms[i];
-            values[i] = new AffineMarginal(model.Posterior(arm.Prior, _state.Statistics[i]), _design.Valuation.Scale, -arm.Cost);
+            var statistics = _state.Statistics[i];
+            if (!ws.HasPosterior(i, statistics))
+                ws.SetPosterior(i, model.Posterior(arm.Prior, statistics), _design.Valuation.Scale, -arm.Cost, statistics);
             if (!_state.Dropped[i]) _inTrial[count++] = i;
         }
-        var summary = BestArmSummary.Of(values, new ArraySegment<int>(_inTrial, 0, count));
-        summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
-        for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = summary.Leader;
+        BestArmSummary.Compute(ws.Values, _inTrial.AsSpan(0, count), ws.Subset, ws.Summary);
+        ws.Summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
+        for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = ws.Summary.Leader;
     }
 }
