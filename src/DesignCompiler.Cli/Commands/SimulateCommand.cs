@@ -31,9 +31,11 @@ internal static class SimulateCommand
             if (r.GetValueOrDefault<string?>() is { } text && Shard.Parse(text) is null) r.AddError($"--shard takes k/n with 1 <= k <= n, not '{text}'");
         });
 
+        var bench = new Option<bool>("--bench") { Description = "Also print how long the simulation itself took (not start-up or loading) to standard error; the report is unchanged." };
+
         var command = new Command("simulate", "Simulate many trials of a design in each scenario and report its operating characteristics.");
         command.Arguments.Add(design);
-        foreach (var option in new Option[] { scenario, reps, threads, seed, margin, format, output, shard }) command.Options.Add(option);
+        foreach (var option in new Option[] { scenario, reps, threads, seed, margin, format, output, shard, bench }) command.Options.Add(option);
         command.SetAction(parse =>
         {
             var shardText = parse.GetValue(shard);
@@ -50,13 +52,13 @@ internal static class SimulateCommand
             }
             return Run(console, parse.GetValue(design)!, parse.GetValue(scenario), parse.GetValue(reps), parse.GetValue(threads),
                 parse.GetValue(seed), parse.GetValue(margin), parse.GetValue(format)!, outPath,
-                shardText is null ? Shard.Whole : Shard.Parse(shardText)!.Value, shardText is not null);
+                shardText is null ? Shard.Whole : Shard.Parse(shardText)!.Value, shardText is not null, parse.GetValue(bench));
         });
         return command;
     }
 
     private static int Run(CliConsole console, string path, string? scenarioName, long reps, int threads, ulong? seed,
-        double? marginGiven, string format, string? outPath, Shard shard, bool writePartial)
+        double? marginGiven, string format, string? outPath, Shard shard, bool writePartial, bool bench)
     {
         var (planner, exit) = SimulationCli.LoadPlanner(console, path);
         if (planner is null) return exit;
@@ -67,7 +69,10 @@ internal static class SimulateCommand
         var (margin, rule) = SimulationCli.Margin(design, marginGiven);
         var settings = new SimulationSettings(reps, threads, seed ?? design.Seed, margin, rule, shard);
         var total = shard.Size(reps) * scenarios.Count;
+        // The clock is read only for the --bench line, never for the report.
+        var started = System.Diagnostics.Stopwatch.GetTimestamp();
         var result = SimulationCli.RunCancellable(console, total, (progress, cancel) => Simulator.Run(planner, scenarios, settings, progress, cancel));
+        if (bench) SimulationCli.ReportBench(console, System.Diagnostics.Stopwatch.GetElapsedTime(started), total, design.Rounds, threads);
 
         if (writePartial) return SimulationCli.Write(console, PartialWriter.Write(result), outPath);
         return SimulationCli.Emit(console, SimulationOutputs.Render(ReportBuilder.Build(result), format), outPath);

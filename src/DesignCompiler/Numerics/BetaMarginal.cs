@@ -12,7 +12,9 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
         if (!IncompleteBeta.ValidParameters(a, b)) throw new ArgumentOutOfRangeException(nameof(a), "Beta parameters must be positive and finite.");
         A = a;
         B = b;
-        kernel = new BetaKernel(a, b, tabulate: true);
+        // No coefficient tables: a posterior lives for one round of a simulation, too short to repay them,
+        // and the panel evaluation shares each coefficient between sixteen nodes anyway.
+        kernel = new BetaKernel(a, b);
         double s = a + b;
         Mean = a / s;
         StdDev = Math.Sqrt(Mean * (b / s) / (s + 1.0));
