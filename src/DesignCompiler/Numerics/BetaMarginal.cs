@@ -3,11 +3,19 @@ using System.Globalization;
 namespace DesignCompiler.Numerics;
 
 /// <summary>Beta(a, b), the posterior of a success rate.</summary>
+/// <remarks>
+/// Immutable to everyone but a <see cref="Planning.PlanWorkspace"/>: the planner's workspace re-targets the
+/// posteriors it made itself between rounds (<see cref="Retarget"/>), so that a simulated round allocates
+/// none. Those objects never leave the workspace's round.
+/// </remarks>
 public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfile, IEquatable<BetaMarginal>
 {
-    private readonly BetaKernel kernel;
+    private BetaKernel kernel;
 
-    public BetaMarginal(double a, double b)
+    public BetaMarginal(double a, double b) => Retarget(a, b);
+
+    /// <summary>Makes this Beta(a, b), exactly as a new one would be.</summary>
+    internal void Retarget(double a, double b)
     {
         if (!IncompleteBeta.ValidParameters(a, b)) throw new ArgumentOutOfRangeException(nameof(a), "Beta parameters must be positive and finite.");
         A = a;
@@ -20,13 +28,13 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
         StdDev = Math.Sqrt(Mean * (b / s) / (s + 1.0));
     }
 
-    public double A { get; }
+    public double A { get; private set; }
 
-    public double B { get; }
+    public double B { get; private set; }
 
-    public double Mean { get; }
+    public double Mean { get; private set; }
 
-    public double StdDev { get; }
+    public double StdDev { get; private set; }
 
     public double LowerBound => 0.0;
 

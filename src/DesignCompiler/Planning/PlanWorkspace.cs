@@ -1,6 +1,7 @@
 using DesignCompiler.Binding;
 using DesignCompiler.Numerics;
 using DesignCompiler.Planning.Allocation;
+using DesignCompiler.Planning.Families;
 using DesignCompiler.Planning.Limits;
 
 namespace DesignCompiler.Planning;
@@ -89,6 +90,23 @@ public sealed class PlanWorkspace
 
     /// <summary>Whether the arm's posterior is already the one for these statistics (its data have not changed).</summary>
     internal bool HasPosterior(int arm, ArmStatistics statistics) => Posteriors[arm] is not null && _cachedStatistics[arm] == statistics;
+
+    /// <summary>
+    /// Brings an arm's posterior up to date with its statistics: a beta posterior this workspace made is
+    /// re-targeted in place (its value wrapper keeps pointing at it), anything else is made anew.
+    /// </summary>
+    internal void UpdatePosterior(int arm, IOutcomeModel model, PriorSpec prior, double scale, double shift, ArmStatistics statistics)
+    {
+        if (HasPosterior(arm, statistics)) return;
+        if (model is BetaBinomialModel beta && Posteriors[arm] is BetaMarginal own)
+        {
+            var (a, b) = beta.PosteriorParameters(prior, statistics);
+            own.Retarget(a, b);
+            _cachedStatistics[arm] = statistics;
+            return;
+        }
+        SetPosterior(arm, model.Posterior(prior, statistics), scale, shift, statistics);
+    }
 
     /// <summary>Keeps an arm's posterior and value; marginals are immutable, so a later round may share them.</summary>
     internal void SetPosterior(int arm, IMarginal posterior, double scale, double shift, ArmStatistics statistics)

@@ -73,9 +73,7 @@ public sealed class RoundPlanner
         var scale = design.Valuation.Scale;
         for (var i = 0; i < arms; i++)
         {
-            var statistics = state.Statistics[i];
-            if (!ws.HasPosterior(i, statistics))
-                ws.SetPosterior(i, _model.Posterior(design.Arms[i].Prior, statistics), scale, -design.Arms[i].Cost, statistics);
+            ws.UpdatePosterior(i, _model, design.Arms[i].Prior, scale, -design.Arms[i].Cost, state.Statistics[i]);
         }
         var values = ws.Values;
 
@@ -91,8 +89,9 @@ public sealed class RoundPlanner
         if (state.RoundsCompleted >= 1)
         {
             var anyDropped = false;
-            foreach (var rule in design.DropRules)
+            for (var r = 0; r < design.DropRules.Count; r++)
             {
+                var rule = design.DropRules[r];
                 if (state.RoundsCompleted < rule.AfterRound) continue;
                 for (var k = 0; k < ws.InTrialCount; k++)
                 {
@@ -108,8 +107,9 @@ public sealed class RoundPlanner
                 Summarise(ws, ws.InTrial.AsSpan(0, ws.InTrialCount), summary);
             }
 
-            foreach (var rule in design.StopRules)
+            for (var r = 0; r < design.StopRules.Count; r++)
             {
+                var rule = design.StopRules[r];
                 if (state.RoundsCompleted < rule.AfterRound) continue;
                 var leader = summary.Leader;
                 var value = Metric(summary, rule.Criterion.Metric, leader);

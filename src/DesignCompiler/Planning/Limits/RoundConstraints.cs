@@ -76,9 +76,12 @@ public sealed class RoundConstraints
                 result.CellMaximum[i, j] = blocks[j].Plots;
             }
 
-            foreach (var limit in design.Bounds)
+            // Indexed loops here and below: this runs for every arm of every simulated round, and an interface
+            // enumerator is an allocation each time.
+            for (var b = 0; b < design.Bounds.Count; b++)
             {
-                if (!limit.Arms.Contains(i)) continue;
+                var limit = design.Bounds[b];
+                if (!Targets(limit, i)) continue;
                 if (limit.Scope == LimitScope.PerRound)
                 {
                     var plots = limit.PlotsFor(total);
@@ -149,12 +152,23 @@ public sealed class RoundConstraints
 
     public static bool IsInWindow(CheckedDesign design, int arm, int round)
     {
-        foreach (var window in design.Windows)
-            if (window.Arm == arm && !window.Contains(round)) return false;
+        for (var w = 0; w < design.Windows.Count; w++)
+            if (design.Windows[w].Arm == arm && !design.Windows[w].Contains(round)) return false;
         return true;
     }
 
-    public static StockLimit? StockOf(CheckedDesign design, int arm) => design.Stocks.FirstOrDefault(s => s.Arm == arm);
+    public static StockLimit? StockOf(CheckedDesign design, int arm)
+    {
+        for (var s = 0; s < design.Stocks.Count; s++)
+            if (design.Stocks[s].Arm == arm) return design.Stocks[s];
+        return null;
+    }
+
+    private static bool Targets(BoundLimit limit, int arm)
+    {
+        for (var k = 0; k < limit.Arms.Count; k++) if (limit.Arms[k] == arm) return true;
+        return false;
+    }
 
     /// <summary>The plots an arm's minimums need in the rounds after <paramref name="round"/>, if it stays in the trial.</summary>
     public static int FutureMinimums(CheckedDesign design, int arm, int round)

@@ -52,8 +52,9 @@ public static class PlotPlacer
     {
         var blocks = design.Blocks.Count;
         var offset = 0;
-        foreach (var block in design.Blocks)
+        for (var b = 0; b < blocks; b++)
         {
+            var block = design.Blocks[b];
             var arms = armOfPlot.Slice(offset, block.Plots);
             var k = 0;
             for (var i = 0; i < design.Arms.Count; i++)

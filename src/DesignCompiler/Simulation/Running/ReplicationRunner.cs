@@ -129,9 +129,7 @@ public sealed class ReplicationRunner
         for (var i = 0; i < arms; i++)
         {
             var arm = _design.Arms[i];
-            var statistics = _state.Statistics[i];
-            if (!ws.HasPosterior(i, statistics))
-                ws.SetPosterior(i, model.Posterior(arm.Prior, statistics), _design.Valuation.Scale, -arm.Cost, statistics);
+            ws.UpdatePosterior(i, model, arm.Prior, _design.Valuation.Scale, -arm.Cost, _state.Statistics[i]);
             if (!_state.Dropped[i]) _inTrial[count++] = i;
         }
         BestArmSummary.Compute(ws.Values, _inTrial.AsSpan(0, count), ws.Subset, ws.Summary);
