@@ -37,9 +37,11 @@ internal static class SimulateCommand
             Description = "Do not simulate the design's equal-allocation twin beside it (about halves the time; the report then has no 'against equal allocation' section).",
         };
 
+        var bench = new Option<bool>("--bench") { Description = "Also print how long the simulation itself took (not start-up or loading) to standard error; the report is unchanged." };
+
         var command = new Command("simulate", "Simulate many trials of a design in each scenario and report its operating characteristics.");
         command.Arguments.Add(design);
-        foreach (var option in new Option[] { scenario, reps, threads, seed, margin, format, output, shard, skipTwin }) command.Options.Add(option);
+        foreach (var option in new Option[] { scenario, reps, threads, seed, margin, format, output, shard, skipTwin, bench }) command.Options.Add(option);
         command.SetAction(parse =>
         {
             var shardText = parse.GetValue(shard);
@@ -56,13 +58,13 @@ internal static class SimulateCommand
             }
             return Run(console, parse.GetValue(design)!, parse.GetValue(scenario), parse.GetValue(reps), parse.GetValue(threads),
                 parse.GetValue(seed), parse.GetValue(margin), parse.GetValue(format)!, outPath,
-                shardText is null ? Shard.Whole : Shard.Parse(shardText)!.Value, shardText is not null, !parse.GetValue(skipTwin));
+                shardText is null ? Shard.Whole : Shard.Parse(shardText)!.Value, shardText is not null, !parse.GetValue(skipTwin), parse.GetValue(bench));
         });
         return command;
     }
 
     private static int Run(CliConsole console, string path, string? scenarioName, long reps, int threads, ulong? seed,
-        double? marginGiven, string format, string? outPath, Shard shard, bool writePartial, bool withTwin)
+        double? marginGiven, string format, string? outPath, Shard shard, bool writePartial, bool withTwin, bool bench)
     {
         var (planner, exit) = SimulationCli.LoadPlanner(console, path);
         if (planner is null) return exit;
@@ -76,7 +78,10 @@ internal static class SimulateCommand
         // The equal-allocation twin runs beside the design on the same random numbers, unless the
         // design already shares plots equally (then the twin would be the design itself).
         var twin = withTwin && design.Policy.Kind != Syntax.PolicyKind.Equal ? RoundPlanner.For(design.EqualTwin()).Planner : null;
+        // The clock is read only for the --bench line, never for the report.
+        var started = System.Diagnostics.Stopwatch.GetTimestamp();
         var result = SimulationCli.RunCancellable(console, total, (progress, cancel) => Simulator.Run(planner, scenarios, settings, progress, cancel, twin));
+        if (bench) SimulationCli.ReportBench(console, System.Diagnostics.Stopwatch.GetElapsedTime(started), total * (twin is null ? 1 : 2), design.Rounds, threads);
 
         if (writePartial) return SimulationCli.Write(console, PartialWriter.Write(result), outPath);
         return SimulationCli.Emit(console, SimulationOutputs.Render(ReportBuilder.Build(result), format), outPath);

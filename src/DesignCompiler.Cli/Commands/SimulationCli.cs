@@ -104,6 +104,15 @@ internal static class SimulationCli
     /// replication starts, those running finish, and the caller reports what finished. A
     /// progress line is drawn only when standard error is a terminal.
     /// </summary>
+    /// <summary>The --bench line: seconds, and µs per simulated round as thread time (seconds · threads / rounds).</summary>
+    public static void ReportBench(CliConsole console, TimeSpan elapsed, long trials, int rounds, int threads)
+    {
+        var seconds = elapsed.TotalSeconds;
+        var perRound = seconds * Math.Max(1, threads) * 1e6 / Math.Max(1, trials * rounds);
+        console.Error.WriteLine(FormattableString.Invariant(
+            $"bench: {trials} trials of {rounds} rounds on {threads} thread(s) in {seconds:F3} s ({perRound:F1} us per round per thread)"));
+    }
+
     public static T RunCancellable<T>(CliConsole console, long total, Func<SimulationProgress, CancellationToken, T> run)
     {
         using var cancel = new CancellationTokenSource();

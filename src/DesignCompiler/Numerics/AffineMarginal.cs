@@ -73,6 +73,22 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProf
         Orient(innerDensity, innerCdf, innerUpper, out density, out cdf, out upperTail);
     }
 
+    void IQuadratureProfile.EvaluateMany(ReadOnlySpan<double> u, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> x = stackalloc double[u.Length];
+        for (int j = 0; j < u.Length; j++) x[j] = Unmap(u[j]);
+        MarginalProfile.EvaluateMany(Inner, x, density, cdf, upperTail);
+        OrientMany(density, cdf, upperTail);
+    }
+
+    void IBoundedProfile.EvaluateNearBoundMany(bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> inner = stackalloc double[distance.Length];
+        for (int j = 0; j < distance.Length; j++) inner[j] = distance[j] / Math.Abs(Scale);
+        MarginalProfile.EvaluateNearBoundMany(Inner, upper == Scale > 0, inner, density, cdf, upperTail);
+        OrientMany(density, cdf, upperTail);
+    }
+
     double IBoundedProfile.PanelWidthNearBound(bool upper, double distance, bool awayFromBound) =>
         Math.Abs(Scale) * MarginalProfile.PanelWidthNearBound(Inner, upper == Scale > 0, distance / Math.Abs(Scale), awayFromBound);
 
@@ -91,6 +107,16 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProf
         density = innerDensity / Math.Abs(Scale);
         cdf = Scale > 0 ? innerCdf : innerUpper;
         upperTail = Scale > 0 ? innerUpper : innerCdf;
+    }
+
+    private void OrientMany(Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        for (int j = 0; j < density.Length; j++)
+        {
+            Orient(density[j], cdf[j], upperTail[j], out density[j], out double lower, out double upper);
+            cdf[j] = lower;
+            upperTail[j] = upper;
+        }
     }
 
     private double Map(double x) => Scale * x + Shift;

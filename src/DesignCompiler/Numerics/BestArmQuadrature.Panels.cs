@@ -7,16 +7,22 @@ internal ref partial struct BestArmQuadrature
     {
         double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
         for (int s = first; s < slots; s++) panelSum[s] = 0;
-        double derivativeSum = 0, momentSum = 0;
         var abscissas = GaussLegendre20.Abscissas.AsSpan();
         var weights = GaussLegendre20.Weights.AsSpan();
         for (int n = 0; n < abscissas.Length; n++)
         {
-            double w = half * weights[n], offset = half * abscissas[n];
-            double left = centre - offset, right = centre + offset;
-            double atLeft = AccumulateNode(left, w), atRight = AccumulateNode(right, w);
+            double offset = half * abscissas[n];
+            nodes[2 * n] = centre - offset;
+            nodes[2 * n + 1] = centre + offset;
+        }
+        for (int s = first; s < slots; s++) EvaluateNodes(s);
+        double derivativeSum = 0, momentSum = 0;
+        for (int n = 0; n < abscissas.Length; n++)
+        {
+            double w = half * weights[n];
+            double atLeft = AccumulateNode(2 * n, w), atRight = AccumulateNode(2 * n + 1, w);
             derivativeSum += w * (atLeft + atRight);
-            momentSum += w * (Position(left) * atLeft + Position(right) * atRight);
+            momentSum += w * (Position(nodes[2 * n]) * atLeft + Position(nodes[2 * n + 1]) * atRight);
         }
         // Below an upper bound G decreases with t, so the panel integral is G(t0) − G(t1) there.
         double expected = coordinate == Coordinate.BelowUpperBound ? g0 - g1 : g1 - g0;
@@ -43,16 +49,16 @@ internal ref partial struct BestArmQuadrature
     }
 
     /// <summary>
-    /// Adds w · f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) to each live slot's panel sum and returns the node's
-    /// Σ_s m_s f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) = G′.
+    /// Adds w · f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) at panel node <paramref name="node"/> to each live slot's
+    /// panel sum and returns the node's Σ_s m_s f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) = G′.
     /// </summary>
-    private readonly double AccumulateNode(double node, double w)
+    private readonly double AccumulateNode(int node, double w)
     {
         for (int s = first; s < slots; s++)
         {
-            EvaluateArm(s, node, out density[s], out cdf[s], out _);
+            double c = nodeCdf[s * PanelNodes + node];
             int m = slotMultiplicity[s];
-            power[s] = m == 1 ? cdf[s] : Math.Pow(cdf[s], m);
+            power[s] = m == 1 ? c : Math.Pow(c, m);
         }
         suffix[slots] = 1.0;
         for (int s = slots - 1; s >= first; s--) suffix[s] = suffix[s + 1] * power[s];
@@ -60,13 +66,35 @@ internal ref partial struct BestArmQuadrature
         for (int s = first; s < slots; s++)
         {
             int m = slotMultiplicity[s];
-            double own = m == 1 ? 1.0 : Math.Pow(cdf[s], m - 1);
-            double integrand = density[s] * own * prefix * suffix[s + 1];
+            double own = m == 1 ? 1.0 : Math.Pow(nodeCdf[s * PanelNodes + node], m - 1);
+            double integrand = nodeDensity[s * PanelNodes + node] * own * prefix * suffix[s + 1];
             panelSum[s] += w * integrand;
             derivative += m * integrand;
             prefix *= power[s];
         }
         return derivative;
+    }
+
+    /// <summary>One slot's density and CDF at all of the panel's nodes, as <see cref="EvaluateArm"/> gives them one by one.</summary>
+    private readonly void EvaluateNodes(int slot)
+    {
+        IMarginal arm = arms[slotArm[slot]];
+        var f = nodeDensity.Slice(slot * PanelNodes, PanelNodes);
+        var cdfValues = nodeCdf.Slice(slot * PanelNodes, PanelNodes);
+        switch (coordinate)
+        {
+            case Coordinate.AboveLowerBound when arm.LowerBound == origin:
+                MarginalProfile.EvaluateNearBoundMany(arm, upper: false, nodes, f, cdfValues, nodeUpper);
+                break;
+            case Coordinate.BelowUpperBound when arm.UpperBound == origin:
+                MarginalProfile.EvaluateNearBoundMany(arm, upper: true, nodes, f, cdfValues, nodeUpper);
+                break;
+            default:
+                Span<double> x = stackalloc double[PanelNodes];
+                for (int j = 0; j < PanelNodes; j++) x[j] = Position(nodes[j]);
+                MarginalProfile.EvaluateMany(arm, x, f, cdfValues, nodeUpper);
+                break;
+        }
     }
 
     /// <summary>G = ∏ F_s^(m_s) over the live slots at a node; optionally kept as the start of the next panel.</summary>

@@ -34,6 +34,8 @@ internal ref partial struct BestArmQuadrature
     // A bound on bisections per call, so that no input can make the quadrature run away.
     private const int MaxSplits = 20_000;
 
+    private const int PanelNodes = 20;
+
     private enum Coordinate { Position, AboveLowerBound, BelowUpperBound }
 
     private readonly IReadOnlyList<IMarginal> arms;
@@ -41,7 +43,11 @@ internal ref partial struct BestArmQuadrature
     private readonly QuadratureSettings settings;
 
     // Per group while groups are formed, then per slot: the surviving groups sorted by their upper support end.
-    private readonly Span<double> lo, hi, above, below, breaks, density, cdf, power, suffix, panelSum, total, endPower, endCdf, endUpper;
+    private readonly Span<double> lo, hi, above, below, breaks, power, suffix, panelSum, total, endPower, endCdf, endUpper;
+
+    // One panel's nodes in the order they are summed (pairs left, right), and every live slot's density and
+    // CDF at them, slot by slot: each arm is evaluated for the whole panel in one call.
+    private readonly Span<double> nodes, nodeDensity, nodeCdf, nodeUpper;
     private readonly Span<int> hashes, order, groupOf, representative, multiplicity, slotOfGroup, slotArm, slotMultiplicity;
 
     private int slots;       // surviving groups
@@ -63,8 +69,10 @@ internal ref partial struct BestArmQuadrature
         above = doubles.Slice(d, k); d += k;
         below = doubles.Slice(d, k); d += k;
         breaks = doubles.Slice(d, k); d += k;
-        density = doubles.Slice(d, k); d += k;
-        cdf = doubles.Slice(d, k); d += k;
+        nodes = doubles.Slice(d, PanelNodes); d += PanelNodes;
+        nodeUpper = doubles.Slice(d, PanelNodes); d += PanelNodes;
+        nodeDensity = doubles.Slice(d, k * PanelNodes); d += k * PanelNodes;
+        nodeCdf = doubles.Slice(d, k * PanelNodes); d += k * PanelNodes;
         power = doubles.Slice(d, k); d += k;
         suffix = doubles.Slice(d, k + 1); d += k + 1;
         panelSum = doubles.Slice(d, k); d += k;
@@ -89,7 +97,7 @@ internal ref partial struct BestArmQuadrature
         splits = 0;
     }
 
-    internal static int DoublesNeeded(int k) => 14 * k + 1;
+    internal static int DoublesNeeded(int k) => 12 * k + 1 + 2 * PanelNodes * (k + 1);
 
     internal static int IntsNeeded(int k) => 8 * k;
 

@@ -11,7 +11,7 @@ namespace DesignCompiler.Numerics;
 /// without x can be tabulated once per distribution, and convergence is tested by cross-multiplication.
 /// A and B are rescaled by powers of two, which is exact, whenever they drift towards overflow.
 /// </remarks>
-internal static class BetaContinuedFraction
+internal static partial class BetaContinuedFraction
 {
     private const double Tolerance = 2.5e-16;
     private const double Big = 1e150;

@@ -11,7 +11,7 @@ namespace DesignCompiler.Numerics;
 /// where L(t) = ln(1+t) − t and δ is the Stirling remainder. The linear terms vanish for the exact mean;
 /// they are kept, computed with fused multiply-adds, because p and q = b/(a+b) are rounded.
 /// </remarks>
-internal readonly struct BetaKernel
+internal readonly partial struct BetaKernel
 {
     private readonly bool centred;
     private readonly double mean, meanComplement, roundingGap, linearSlope, logConstant, switchPoint;
@@ -78,7 +78,7 @@ internal readonly struct BetaKernel
     {
         if (!(x > 0)) { lower = 0; upper = 1; return; }
         if (!(y > 0)) { lower = 1; upper = 0; return; }
-        TailsFromLogPrefactor(x, y, LogPrefactor(x, y), out lower, out upper);
+        TailsFromPrefactor(x, y, Math.Exp(LogPrefactor(x, y)), out lower, out upper);
     }
 
     /// <summary>Density and both tails at one point; they share the prefactor, the costly part.</summary>
@@ -91,14 +91,64 @@ internal readonly struct BetaKernel
             upper = 1 - lower;
             return;
         }
-        double logPrefactor = LogPrefactor(x, y);
-        density = Math.Exp(logPrefactor) / (x * y);
-        TailsFromLogPrefactor(x, y, logPrefactor, out lower, out upper);
+        double prefactor = Math.Exp(LogPrefactor(x, y));
+        density = prefactor / (x * y);
+        TailsFromPrefactor(x, y, prefactor, out lower, out upper);
     }
 
-    private void TailsFromLogPrefactor(double x, double y, double logPrefactor, out double lower, out double upper)
+    /// <summary>
+    /// <see cref="Evaluate"/> at many points (x[j], y[j]) at once, each result bit for bit the one it gives;
+    /// the continued fractions run side by side in vector lanes.
+    /// </summary>
+    internal void EvaluateMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> density, Span<double> lower, Span<double> upper)
     {
-        double prefactor = Math.Exp(logPrefactor);
+        int n = x.Length;
+        Span<double> prefactor = stackalloc double[n], lowerArguments = stackalloc double[n], upperArguments = stackalloc double[n];
+        Span<double> fraction = stackalloc double[n];
+        Span<int> lowerAt = stackalloc int[n], upperAt = stackalloc int[n];
+        int lowerCount = 0, upperCount = 0;
+        Span<double> logPrefactor = stackalloc double[n];
+        LogPrefactorMany(x, y, logPrefactor);
+        for (int j = 0; j < n; j++)
+        {
+            if (!(x[j] > 0) || !(y[j] > 0))
+            {
+                density[j] = 0;
+                lower[j] = x[j] > 0 ? 1 : 0;
+                upper[j] = 1 - lower[j];
+                continue;
+            }
+            prefactor[j] = Math.Exp(logPrefactor[j]);
+            density[j] = prefactor[j] / (x[j] * y[j]);
+            if (UseLowerFraction(x[j], y[j]))
+            {
+                lowerAt[lowerCount] = j;
+                lowerArguments[lowerCount++] = x[j];
+            }
+            else
+            {
+                upperAt[upperCount] = j;
+                upperArguments[upperCount++] = y[j];
+            }
+        }
+        BetaContinuedFraction.EvaluateMany(A, B, lowerArguments[..lowerCount], lowerTable, fraction);
+        for (int i = 0; i < lowerCount; i++)
+        {
+            int j = lowerAt[i];
+            lower[j] = Math.Min(1.0, prefactor[j] * fraction[i] / A);
+            upper[j] = 1.0 - lower[j];
+        }
+        BetaContinuedFraction.EvaluateMany(B, A, upperArguments[..upperCount], upperTable, fraction);
+        for (int i = 0; i < upperCount; i++)
+        {
+            int j = upperAt[i];
+            upper[j] = Math.Min(1.0, prefactor[j] * fraction[i] / B);
+            lower[j] = 1.0 - upper[j];
+        }
+    }
+
+    private void TailsFromPrefactor(double x, double y, double prefactor, out double lower, out double upper)
+    {
         if (UseLowerFraction(x, y))
         {
             lower = Math.Min(1.0, prefactor * BetaContinuedFraction.Evaluate(A, B, x, lowerTable) / A);

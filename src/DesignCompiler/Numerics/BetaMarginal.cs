@@ -3,28 +3,38 @@ using System.Globalization;
 namespace DesignCompiler.Numerics;
 
 /// <summary>Beta(a, b), the posterior of a success rate.</summary>
+/// <remarks>
+/// Immutable to everyone but a <see cref="Planning.PlanWorkspace"/>: the planner's workspace re-targets the
+/// posteriors it made itself between rounds (<see cref="Retarget"/>), so that a simulated round allocates
+/// none. Those objects never leave the workspace's round.
+/// </remarks>
 public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfile, IEquatable<BetaMarginal>
 {
-    private readonly BetaKernel kernel;
+    private BetaKernel kernel;
 
-    public BetaMarginal(double a, double b)
+    public BetaMarginal(double a, double b) => Retarget(a, b);
+
+    /// <summary>Makes this Beta(a, b), exactly as a new one would be.</summary>
+    internal void Retarget(double a, double b)
     {
         if (!IncompleteBeta.ValidParameters(a, b)) throw new ArgumentOutOfRangeException(nameof(a), "Beta parameters must be positive and finite.");
         A = a;
         B = b;
-        kernel = new BetaKernel(a, b, tabulate: true);
+        // No coefficient tables: a posterior lives for one round of a simulation, too short to repay them,
+        // and the panel evaluation shares each coefficient between sixteen nodes anyway.
+        kernel = new BetaKernel(a, b);
         double s = a + b;
         Mean = a / s;
         StdDev = Math.Sqrt(Mean * (b / s) / (s + 1.0));
     }
 
-    public double A { get; }
+    public double A { get; private set; }
 
-    public double B { get; }
+    public double B { get; private set; }
 
-    public double Mean { get; }
+    public double Mean { get; private set; }
 
-    public double StdDev { get; }
+    public double StdDev { get; private set; }
 
     public double LowerBound => 0.0;
 
@@ -85,6 +95,21 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
 
     void IQuadratureProfile.Evaluate(double x, out double density, out double cdf, out double upperTail) =>
         kernel.Evaluate(x, 1.0 - x, out density, out cdf, out upperTail);
+
+    void IQuadratureProfile.EvaluateMany(ReadOnlySpan<double> x, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> y = stackalloc double[x.Length];
+        for (int j = 0; j < x.Length; j++) y[j] = 1.0 - x[j];
+        kernel.EvaluateMany(x, y, density, cdf, upperTail);
+    }
+
+    void IBoundedProfile.EvaluateNearBoundMany(bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> complement = stackalloc double[distance.Length];
+        for (int j = 0; j < distance.Length; j++) complement[j] = 1.0 - distance[j];
+        if (upper) kernel.EvaluateMany(complement, distance, density, cdf, upperTail);
+        else kernel.EvaluateMany(distance, complement, density, cdf, upperTail);
+    }
 
     void IBoundedProfile.EvaluateNearBound(bool upper, double distance, out double density, out double cdf, out double upperTail)
     {

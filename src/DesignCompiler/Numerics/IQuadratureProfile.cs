@@ -24,6 +24,16 @@ internal interface IQuadratureProfile
     double PanelWidth(double x, bool forward);
 
     void Evaluate(double x, out double density, out double cdf, out double upperTail);
+
+    /// <summary>
+    /// <see cref="Evaluate"/> at every point of <paramref name="x"/>, each result bit for bit the one it gives;
+    /// the quadrature asks for a whole panel's nodes at once, so that an implementation can share work
+    /// between them.
+    /// </summary>
+    void EvaluateMany(ReadOnlySpan<double> x, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        for (int j = 0; j < x.Length; j++) Evaluate(x[j], out density[j], out cdf[j], out upperTail[j]);
+    }
 }
 
 /// <summary>
@@ -34,6 +44,12 @@ internal interface IQuadratureProfile
 internal interface IBoundedProfile
 {
     void EvaluateNearBound(bool upper, double distance, out double density, out double cdf, out double upperTail);
+
+    /// <summary><see cref="EvaluateNearBound"/> at every distance, each result bit for bit the one it gives.</summary>
+    void EvaluateNearBoundMany(bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        for (int j = 0; j < distance.Length; j++) EvaluateNearBound(upper, distance[j], out density[j], out cdf[j], out upperTail[j]);
+    }
 
     /// <summary>Panel width at <paramref name="distance"/> from the bound, for a panel moving away from it or towards it.</summary>
     double PanelWidthNearBound(bool upper, double distance, bool awayFromBound);

@@ -46,6 +46,27 @@ internal static class MarginalProfile
         upperTail = m.UpperTail(x);
     }
 
+    internal static void EvaluateMany(IMarginal m, ReadOnlySpan<double> x, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        if (m is IQuadratureProfile p)
+        {
+            p.EvaluateMany(x, density, cdf, upperTail);
+            return;
+        }
+        for (int j = 0; j < x.Length; j++) Evaluate(m, x[j], out density[j], out cdf[j], out upperTail[j]);
+    }
+
+    internal static void EvaluateNearBoundMany(
+        IMarginal m, bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        if (m is IBoundedProfile p)
+        {
+            p.EvaluateNearBoundMany(upper, distance, density, cdf, upperTail);
+            return;
+        }
+        for (int j = 0; j < distance.Length; j++) EvaluateNearBound(m, upper, distance[j], out density[j], out cdf[j], out upperTail[j]);
+    }
+
     internal static void EvaluateNearBound(
         IMarginal m, bool upper, double distance, out double density, out double cdf, out double upperTail)
     {

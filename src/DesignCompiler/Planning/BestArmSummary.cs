@@ -33,12 +33,10 @@ public sealed class BestArmSummary
     public static BestArmSummary Of(IReadOnlyList<IMarginal> values, IReadOnlyList<int> subset)
     {
         var arms = values.Count;
-        var probability = new double[arms];
-        var loss = new double[arms];
-        if (subset.Count == 0) return new BestArmSummary(probability, loss, 0, 0);
-
-        var chosen = subset.Select(i => values[i]).ToList();
-        return From(ProbabilityOfBest.Compute(chosen), values, subset);
+        var buffers = new PlanWorkspace.SummaryBuffers(arms);
+        var indices = subset.ToArray();
+        Compute(values, indices, new MarginalSubset(arms), buffers);
+        return new BestArmSummary(buffers.ProbabilityBest, buffers.ExpectedLoss, buffers.ErrorBound, buffers.Leader);
     }
 
     /// <summary>
@@ -47,8 +45,21 @@ public sealed class BestArmSummary
     /// </summary>
     public static BestArmSummary OfJoint(Joint joint, IReadOnlyList<IMarginal> values, IReadOnlyList<int> subset)
     {
-        if (subset.Count == 0) return new BestArmSummary(new double[values.Count], new double[values.Count], 0, 0);
-        var k = subset.Count;
+        var buffers = new PlanWorkspace.SummaryBuffers(values.Count);
+        ComputeJoint(joint, values, subset.ToArray(), buffers);
+        return new BestArmSummary(buffers.ProbabilityBest, buffers.ExpectedLoss, buffers.ErrorBound, buffers.Leader);
+    }
+
+    /// <summary><see cref="OfJoint"/> into reusable buffers.</summary>
+    internal static void ComputeJoint(Joint joint, IReadOnlyList<IMarginal> values, ReadOnlySpan<int> subset, PlanWorkspace.SummaryBuffers into)
+    {
+        var arms = values.Count;
+        Array.Clear(into.ProbabilityBest);
+        Array.Clear(into.ExpectedLoss);
+        into.ErrorBound = 0;
+        into.Leader = 0;
+        if (subset.Length == 0) return;
+        var k = subset.Length;
         var location = new double[k];
         var scale = new double[k, k];
         for (var a = 0; a < k; a++)
@@ -56,25 +67,51 @@ public sealed class BestArmSummary
             location[a] = joint.Location[subset[a]];
             for (var b = 0; b < k; b++) scale[a, b] = joint.Scale[subset[a], subset[b]];
         }
-        return From(CorrelatedBestArm.Compute(location, scale, joint.Df), values, subset);
-    }
-
-    private static BestArmSummary From(BestArmResult result, IReadOnlyList<IMarginal> values, IReadOnlyList<int> subset)
-    {
-        var arms = values.Count;
-        var probability = new double[arms];
-        var loss = new double[arms];
-        for (var k = 0; k < subset.Count; k++)
+        var result = CorrelatedBestArm.Compute(location, scale, joint.Df);
+        var inSubset = new bool[arms];
+        for (var a = 0; a < k; a++)
         {
-            probability[subset[k]] = result.Probabilities[k];
-            loss[subset[k]] = result.ExpectedLoss[k];
+            inSubset[subset[a]] = true;
+            into.ProbabilityBest[subset[a]] = result.Probabilities[a];
+            into.ExpectedLoss[subset[a]] = result.ExpectedLoss[a];
         }
         for (var i = 0; i < arms; i++)
-            if (!subset.Contains(i)) loss[i] = Math.Max(0, result.ExpectedMaximum - values[i].Mean);
+            if (!inSubset[i]) into.ExpectedLoss[i] = Math.Max(0, result.ExpectedMaximum - values[i].Mean);
+        var leader = subset[0];
+        foreach (var i in subset)
+            if (into.ProbabilityBest[i] > into.ProbabilityBest[leader]) leader = i;
+        into.Leader = leader;
+        into.ErrorBound = result.ErrorBound;
+    }
+
+    /// <summary>The same into reusable buffers, for the planner's workspace.</summary>
+    internal static void Compute(IReadOnlyList<IMarginal> values, ReadOnlySpan<int> subset, MarginalSubset chosen, PlanWorkspace.SummaryBuffers into)
+    {
+        var arms = values.Count;
+        var probability = into.ProbabilityBest;
+        var loss = into.ExpectedLoss;
+        Array.Clear(probability);
+        Array.Clear(loss);
+        into.ErrorBound = 0;
+        into.Leader = 0;
+        if (subset.Length == 0) return;
+
+        chosen.Fill(values, subset);
+        Span<double> p = stackalloc double[subset.Length];
+        Span<double> l = stackalloc double[subset.Length];
+        var error = ProbabilityOfBest.Compute(chosen, p, l, out var expectedMaximum);
+        for (var k = 0; k < subset.Length; k++)
+        {
+            probability[subset[k]] = p[k];
+            loss[subset[k]] = l[k];
+        }
+        for (var i = 0; i < arms; i++)
+            if (!subset.Contains(i)) loss[i] = Math.Max(0, expectedMaximum - values[i].Mean);
 
         var leader = subset[0];
         foreach (var i in subset)
             if (probability[i] > probability[leader]) leader = i;
-        return new BestArmSummary(probability, loss, result.ErrorBound, leader);
+        into.ErrorBound = error;
+        into.Leader = leader;
     }
 }

@@ -6,6 +6,7 @@ using DesignCompiler.Planning.Families;
 using DesignCompiler.Planning.Limits;
 using DesignCompiler.Planning.Placement;
 using DesignCompiler.Planning.Policies;
+using DesignCompiler.Syntax;
 
 namespace DesignCompiler.Planning;
 
@@ -42,63 +43,107 @@ public sealed class RoundPlanner
     public static (RoundPlanner? Planner, Diagnostic? Problem) For(CheckedDesign design) =>
         (new RoundPlanner(design, OutcomeModels.For(design.Outcome), AllocationPolicies.For(design.Policy)), null);
 
-    /// <summary>The posteriors of every arm from what <paramref name="state"/> has recorded.</summary>
+    /// <summary>The posteriors of every arm from what <paramref name="state"/> has recorded (for status, reports and analysis).</summary>
     public TrialBelief Believe(TrialState state) => TrialBelief.For(_design, _model, state);
 
     public PlanResult Plan(TrialState state, int round)
     {
+        var workspace = new PlanWorkspace(_design);
+        Decide(state, round, workspace);
+        return ResultOf(state, round, workspace);
+    }
+
+    /// <summary>
+    /// Every decision of the round, into the workspace's buffers: posteriors, drop and stop rules, the
+    /// policy's shares, plots per arm and per block, and the arm on every plot. <see cref="Plan"/> is this
+    /// followed by <see cref="ResultOf"/>; the simulator reads the workspace directly, so a simulated round
+    /// allocates nothing when the design's policy and limits do not need to.
+    /// </summary>
+    /// <returns>true when the round is planned; otherwise <see cref="ResultOf"/> says why not.</returns>
+    public bool Decide(TrialState state, int round, PlanWorkspace workspace)
+    {
         var design = _design;
+        var ws = workspace;
+        ws.StopReason = null;
+        ws.Failure = RoundFailure.None;
         if (round < 1 || round > design.Rounds)
-            return Fail(DiagnosticCatalog.RoundOutOfRange, design.Locate(default), round, design.Rounds);
+        {
+            ws.Failure = RoundFailure.RoundOutOfRange;
+            return false;
+        }
 
         var arms = design.Arms.Count;
-        var belief = Believe(state);
-        var posteriors = belief.Posteriors;
-        var values = belief.Values;
+        var scale = design.Valuation.Scale;
+        if (design.Model.IsAdjusted)
+        {
+            // One linear model over every recorded plot: the arms' posteriors are refitted each round.
+            var (posteriors, joint) = AdjustedBelief.Fit(design, state);
+            for (var i = 0; i < arms; i++) ws.SetPosterior(i, posteriors[i], scale, -design.Arms[i].Cost, state.Statistics[i]);
+            ws.Joint = joint;
+        }
+        else
+        {
+            for (var i = 0; i < arms; i++)
+                ws.UpdatePosterior(i, _model, design.Arms[i].Prior, scale, -design.Arms[i].Cost, state.Statistics[i]);
+        }
+        var values = ws.Values;
 
-        var dropped = (bool[])state.Dropped.Clone();
-        var inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
-        var summary = belief.Summarize(inTrial);
+        var dropped = ws.Dropped;
+        var newlyDropped = ws.NewlyDropped;
+        state.Dropped.CopyTo(dropped, 0);
+        Array.Clear(newlyDropped);
+        ws.InTrialCount = Select(dropped, ws.InTrial);
+        var summary = ws.Summary;
+        Summarise(ws, ws.InTrial.AsSpan(0, ws.InTrialCount), summary);
 
         // Drop rules, then stop rules, on what is known after the last recorded round.
-        var newlyDropped = new bool[arms];
         if (state.RoundsCompleted >= 1)
         {
-            foreach (var rule in design.DropRules)
+            var anyDropped = false;
+            for (var r = 0; r < design.DropRules.Count; r++)
             {
+                var rule = design.DropRules[r];
                 if (state.RoundsCompleted < rule.AfterRound) continue;
-                foreach (var i in inTrial)
-                    if (i != design.Control && rule.Criterion.Holds(summary.Metric(rule.Criterion.Metric, i)))
-                        newlyDropped[i] = true;
+                for (var k = 0; k < ws.InTrialCount; k++)
+                {
+                    var i = ws.InTrial[k];
+                    if (i != design.Control && rule.Criterion.Holds(Metric(summary, rule.Criterion.Metric, i)))
+                        newlyDropped[i] = anyDropped = true;
+                }
             }
-            if (newlyDropped.Any(d => d))
+            if (anyDropped)
             {
                 for (var i = 0; i < arms; i++) dropped[i] |= newlyDropped[i];
-                inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
-                summary = belief.Summarize(inTrial);
+                ws.InTrialCount = Select(dropped, ws.InTrial);
+                Summarise(ws, ws.InTrial.AsSpan(0, ws.InTrialCount), summary);
             }
 
-            foreach (var rule in design.StopRules)
+            for (var r = 0; r < design.StopRules.Count; r++)
             {
+                var rule = design.StopRules[r];
                 if (state.RoundsCompleted < rule.AfterRound) continue;
                 var leader = summary.Leader;
-                var value = summary.Metric(rule.Criterion.Metric, leader);
+                var value = Metric(summary, rule.Criterion.Metric, leader);
                 if (rule.Criterion.Holds(value))
-                    return new PlanResult(null, FormattableString.Invariant(
-                        $"the trial stops after round {state.RoundsCompleted}: '{rule.Criterion.Describe()}' holds for {design.Arms[leader].Code} ({value:0.####})"), []);
+                {
+                    ws.StopReason = FormattableString.Invariant(
+                        $"the trial stops after round {state.RoundsCompleted}: '{rule.Criterion.Describe()}' holds for {design.Arms[leader].Code} ({value:0.####})");
+                    return false;
+                }
             }
         }
 
-        if (dropped.Any(d => d) && KeepEnoughArmsToFillTheRound(round, state, summary, dropped))
+        if (Array.IndexOf(dropped, true) >= 0 && KeepEnoughArmsToFillTheRound(round, state, summary.ExpectedLoss, dropped))
         {
             for (var i = 0; i < arms; i++) newlyDropped[i] &= dropped[i];
-            inTrial = Enumerable.Range(0, arms).Where(i => !dropped[i]).ToList();
-            summary = belief.Summarize(inTrial);
+            ws.InTrialCount = Select(dropped, ws.InTrial);
+            Summarise(ws, ws.InTrial.AsSpan(0, ws.InTrialCount), summary);
         }
 
         var rotation = RotationRules.For(design, round, state.History);
         var constraints = RoundConstraints.Resolve(design, round, state.PlotsIssued, dropped,
-            rotation.Any ? rotation.AllowedPlots(design) : null);
+            rotation.Any ? rotation.AllowedPlots(design) : null, ws.Constraints);
+        ws.Constraints = constraints;
         var available = constraints.Available;
         for (var i = 0; i < arms; i++)
         {
@@ -107,25 +152,110 @@ public sealed class RoundPlanner
                 available[i] = false;
         }
 
-        var sown = Enumerable.Range(0, arms).Where(i => available[i]).ToList();
-        var allocationSummary = sown.SequenceEqual(inTrial) ? summary : belief.Summarize(sown);
+        ws.SownCount = Select(available, ws.Sown, selected: true);
+        var allocationSummary = summary;
+        if (!ws.Sown.AsSpan(0, ws.SownCount).SequenceEqual(ws.InTrial.AsSpan(0, ws.InTrialCount)))
+        {
+            allocationSummary = ws.AllocationSummary;
+            Summarise(ws, ws.Sown.AsSpan(0, ws.SownCount), allocationSummary);
+        }
 
-        var shares = new double[arms];
-        _policy.TargetShares(new PolicyContext(design, round, design.PlotsPerRound, available, values,
+        var shares = ws.Shares;
+        Array.Clear(shares);
+        _policy.TargetShares(new PolicyContext(design, round, ws.PlotsPerRound, available, values,
             allocationSummary.ProbabilityBest, state.Statistics), shares);
 
-        var totals = BoundedApportionment.Apportion(shares, design.PlotsPerRound, constraints.RoundMinimum, constraints.RoundMaximum,
+        ws.Apportionment = BoundedApportionment.Apportion(shares, ws.PlotsPerRound, constraints.RoundMinimum, constraints.RoundMaximum, ws.Totals,
             RoundingUniform(round));
-        if (!totals.IsFeasible) return InfeasibilityReport.ForRound(design, constraints, totals);
+        if (!ws.Apportionment.IsFeasible)
+        {
+            ws.Failure = RoundFailure.Apportionment;
+            return false;
+        }
 
-        var table = ControlledRounding.Round(totals.Counts, design.Blocks.Select(b => b.Plots).ToArray(),
-            constraints.CellMinimum, constraints.CellMaximum);
-        if (!table.IsFeasible) return InfeasibilityReport.ForBlocks(design, constraints, totals.Counts, table);
+        var blocks = design.Blocks.Count;
+        for (var i = 0; i < arms; i++)
+        {
+            for (var j = 0; j < blocks; j++)
+            {
+                ws.CellMinimum[i * blocks + j] = constraints.CellMinimum[i, j];
+                ws.CellMaximum[i * blocks + j] = constraints.CellMaximum[i, j];
+            }
+        }
+        ws.TableStatus = ControlledRounding.Round(ws.Totals, ws.BlockPlots, ws.CellMinimum, ws.CellMaximum, ws.Table, ws.Rounding);
+        if (!ws.TableStatus.IsFeasible)
+        {
+            ws.Failure = RoundFailure.Table;
+            return false;
+        }
 
-        var placement = PlotPlacer.Place(design, round, table.Counts, rotation);
-        if (placement.Assignments is null) return InfeasibilityReport.ForRotation(design, placement.Problem!);
-        var plan = BuildPlan(state, round, posteriors, summary, shares, totals.Counts, table.Counts, placement.Assignments, dropped, newlyDropped, constraints);
+        ws.PlacementProblem = PlotPlacer.PlaceArms(design, round, ws.Table, rotation, ws.ArmOfPlot);
+        if (ws.PlacementProblem is not null)
+        {
+            ws.Failure = RoundFailure.Placement;
+            return false;
+        }
+        return true;
+    }
+
+    /// <summary>The plan, the stop or the diagnostics that the workspace's last <see cref="Decide"/> came to.</summary>
+    public PlanResult ResultOf(TrialState state, int round, PlanWorkspace workspace)
+    {
+        var design = _design;
+        var ws = workspace;
+        if (ws.StopReason is not null) return new PlanResult(null, ws.StopReason, []);
+        var blocks = design.Blocks.Count;
+        switch (ws.Failure)
+        {
+            case RoundFailure.RoundOutOfRange:
+                return Fail(DiagnosticCatalog.RoundOutOfRange, design.Locate(default), round, design.Rounds);
+            case RoundFailure.Apportionment:
+                return InfeasibilityReport.ForRound(design, ws.Constraints!, new ApportionmentResult(ws.Apportionment, ws.Totals));
+            case RoundFailure.Table:
+                return InfeasibilityReport.ForBlocks(design, ws.Constraints!, ws.Totals, new ControlledRoundingResult(ws.TableStatus, new int[design.Arms.Count, blocks]));
+            case RoundFailure.Placement:
+                return InfeasibilityReport.ForRotation(design, ws.PlacementProblem!);
+        }
+
+        var table = new int[design.Arms.Count, blocks];
+        for (var i = 0; i < design.Arms.Count; i++)
+            for (var j = 0; j < blocks; j++) table[i, j] = ws.Table[i * blocks + j];
+        var plan = BuildPlan(state, round, ws, table, Assignments(ws.ArmOfPlot));
         return new PlanResult(plan, null, []);
+    }
+
+    private List<PlotAssignment> Assignments(int[] armOfPlot)
+    {
+        var design = _design;
+        var result = new List<PlotAssignment>(armOfPlot.Length);
+        var offset = 0;
+        foreach (var block in design.Blocks)
+        {
+            for (var plot = 0; plot < block.Plots; plot++)
+            {
+                var arm = armOfPlot[offset + plot];
+                result.Add(new PlotAssignment(block.Name, block.Index, plot, block.PlotId(plot), block.RowOf(plot), block.ColumnOf(plot), arm, design.Arms[arm].Code));
+            }
+            offset += block.Plots;
+        }
+        return result;
+    }
+
+    private static double Metric(PlanWorkspace.SummaryBuffers summary, CriterionMetric metric, int arm) =>
+        metric == CriterionMetric.Best ? summary.ProbabilityBest[arm] : summary.ExpectedLoss[arm];
+
+    /// <summary>The indices where <paramref name="flags"/> is <paramref name="selected"/> (false: the arms not dropped), in order.</summary>
+    private static int Select(bool[] flags, int[] into, bool selected = false)
+    {
+        var count = 0;
+        for (var i = 0; i < flags.Length; i++) if (flags[i] == selected) into[count++] = i;
+        return count;
+    }
+
+    private static void Summarise(PlanWorkspace ws, ReadOnlySpan<int> subset, PlanWorkspace.SummaryBuffers into)
+    {
+        if (ws.Joint is { } joint) BestArmSummary.ComputeJoint(joint, ws.Values, subset, into);
+        else BestArmSummary.Compute(ws.Values, subset, ws.Subset, into);
     }
 
     /// <summary>
@@ -143,10 +273,10 @@ public sealed class RoundPlanner
     /// stock ran out), dropped arms come back, smallest expected loss first, until they can.
     /// Returns true when it brought any back.
     /// </summary>
-    private bool KeepEnoughArmsToFillTheRound(int round, TrialState state, BestArmSummary summary, bool[] dropped)
+    private bool KeepEnoughArmsToFillTheRound(int round, TrialState state, double[] expectedLoss, bool[] dropped)
     {
         var candidates = Enumerable.Range(0, dropped.Length).Where(i => dropped[i])
-            .OrderBy(i => summary.ExpectedLoss[i]).ThenBy(i => i).ToList();
+            .OrderBy(i => expectedLoss[i]).ThenBy(i => i).ToList();
         var restored = false;
         foreach (var keep in candidates.Prepend(-1))
         {
@@ -163,19 +293,18 @@ public sealed class RoundPlanner
         return restored;
     }
 
-    private RoundPlan BuildPlan(
-        TrialState state, int round, IMarginal[] posteriors, BestArmSummary summary, double[] shares,
-        int[] totals, int[,] table, IReadOnlyList<PlotAssignment> assignments, bool[] dropped, bool[] newlyDropped,
-        RoundConstraints constraints)
+    private RoundPlan BuildPlan(TrialState state, int round, PlanWorkspace ws, int[,] table, IReadOnlyList<PlotAssignment> assignments)
     {
         var design = _design;
+        var summary = ws.Summary;
         var armPlans = new List<ArmPlan>();
         for (var i = 0; i < design.Arms.Count; i++)
         {
             var arm = design.Arms[i];
-            var interval = CredibleInterval.EqualTailed(posteriors[i], 0.95);
-            armPlans.Add(new ArmPlan(i, arm.Code, arm.Label, i == design.Control, StatusOf(i, round, dropped, constraints),
-                totals[i], shares[i], summary.ProbabilityBest[i], posteriors[i].Mean, interval.Lower, interval.Upper,
+            var posterior = ws.Posteriors[i];
+            var interval = CredibleInterval.EqualTailed(posterior, 0.95);
+            armPlans.Add(new ArmPlan(i, arm.Code, arm.Label, i == design.Control, StatusOf(i, round, ws.Dropped, ws.Constraints!),
+                ws.Totals[i], ws.Shares[i], summary.ProbabilityBest[i], posterior.Mean, interval.Lower, interval.Upper,
                 summary.ExpectedLoss[i], state.Statistics[i].Count));
         }
 

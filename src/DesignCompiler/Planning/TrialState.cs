@@ -53,6 +53,32 @@ public sealed class TrialState
         History.Add(plan.Assignments.Select(a => a.Arm).ToArray());
     }
 
+    /// <summary>
+    /// The same from a workspace's decision: plots per arm, which arms stay dropped, and the arm on every
+    /// plot. The history arrays of earlier trials are reused, so a simulated round allocates nothing.
+    /// </summary>
+    public void Issue(ReadOnlySpan<int> plotsPerArm, ReadOnlySpan<bool> dropped, ReadOnlySpan<int> armOfPlot)
+    {
+        for (var i = 0; i < PlotsIssued.Length; i++)
+        {
+            PlotsIssued[i] += plotsPerArm[i];
+            Dropped[i] = dropped[i];
+        }
+        var round = History.Count;
+        if (round == _spareHistory.Count || _spareHistory[round].Length != armOfPlot.Length) SpareHistory(round, armOfPlot.Length);
+        armOfPlot.CopyTo(_spareHistory[round]);
+        History.Add(_spareHistory[round]);
+    }
+
+    // History arrays kept across Reset, one per round, for the simulator's trials.
+    private readonly List<int[]> _spareHistory = [];
+
+    private void SpareHistory(int round, int plots)
+    {
+        if (round == _spareHistory.Count) _spareHistory.Add(new int[plots]);
+        else _spareHistory[round] = new int[plots];
+    }
+
     public void Reset()
     {
         Array.Clear(Statistics);

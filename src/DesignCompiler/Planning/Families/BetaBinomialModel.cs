@@ -15,10 +15,17 @@ public sealed class BetaBinomialModel(int trialsPerPlot) : IOutcomeModel
 
     public IMarginal Posterior(PriorSpec prior, ArmStatistics data)
     {
+        var (a, b) = PosteriorParameters(prior, data);
+        return new BetaMarginal(a, b);
+    }
+
+    /// <summary>The posterior's (a, b); the planner's workspace re-targets its own posteriors with them.</summary>
+    public (double A, double B) PosteriorParameters(PriorSpec prior, ArmStatistics data)
+    {
         var beta = (BetaPriorSpec)prior;
         var successes = data.Sum;
         var failures = (double)TrialsPerPlot * data.Count - successes;
-        return new BetaMarginal(beta.A + successes, beta.B + failures);
+        return (beta.A + successes, beta.B + failures);
     }
 
     public (bool Ok, string Rule) Accepts(double value) =>

@@ -28,7 +28,7 @@ public sealed class RoundConstraints
     /// <summary>Cells whose maximum is the number of plots the rotation rules leave for the arm.</summary>
     public bool[,] RotationCapped { get; }
 
-    public int Round { get; }
+    public int Round { get; private set; }
     public bool[] Available { get; }
     public int[] RoundMinimum { get; }
     public int[] RoundMaximum { get; }
@@ -51,12 +51,16 @@ public sealed class RoundConstraints
     /// can never use up the seed that a later minimum needs.
     /// </summary>
     /// <param name="allowedPlots">When rotation rules apply, how many plots of each block may grow each arm this round.</param>
-    public static RoundConstraints Resolve(CheckedDesign design, int round, ReadOnlySpan<int> stockUsed, ReadOnlySpan<bool> dropped, int[,]? allowedPlots = null)
+    /// <param name="reuse">an earlier result for the same design to overwrite instead of allocating a new one (the simulator's hot loop).</param>
+    public static RoundConstraints Resolve(CheckedDesign design, int round, ReadOnlySpan<int> stockUsed, ReadOnlySpan<bool> dropped, int[,]? allowedPlots = null,
+        RoundConstraints? reuse = null)
     {
         var arms = design.Arms.Count;
         var blocks = design.Blocks;
         var total = design.PlotsPerRound;
-        var result = new RoundConstraints(round, arms, blocks.Count);
+        var result = reuse is not null && reuse.Available.Length == arms && reuse.CellMinimum.GetLength(1) == blocks.Count
+            ? reuse.Cleared(round)
+            : new RoundConstraints(round, arms, blocks.Count);
 
         for (var i = 0; i < arms; i++)
         {
@@ -72,9 +76,12 @@ public sealed class RoundConstraints
                 result.CellMaximum[i, j] = blocks[j].Plots;
             }
 
-            foreach (var limit in design.Bounds)
+            // Indexed loops here and below: this runs for every arm of every simulated round, and an interface
+            // enumerator is an allocation each time.
+            for (var b = 0; b < design.Bounds.Count; b++)
             {
-                if (!limit.Arms.Contains(i)) continue;
+                var limit = design.Bounds[b];
+                if (!Targets(limit, i)) continue;
                 if (limit.Scope == LimitScope.PerRound)
                 {
                     var plots = limit.PlotsFor(total);
@@ -127,14 +134,41 @@ public sealed class RoundConstraints
         return result;
     }
 
+    private RoundConstraints Cleared(int round)
+    {
+        Round = round;
+        Array.Clear(Available);
+        Array.Clear(RoundMinimum);
+        Array.Clear(RoundMaximum);
+        Array.Clear(CellMinimum);
+        Array.Clear(CellMaximum);
+        Array.Clear(RoundMinimumSource);
+        Array.Clear(RoundMaximumSource);
+        Array.Clear(CellMinimumSource);
+        Array.Clear(CellMaximumSource);
+        Array.Clear(RotationCapped);
+        return this;
+    }
+
     public static bool IsInWindow(CheckedDesign design, int arm, int round)
     {
-        foreach (var window in design.Windows)
-            if (window.Arm == arm && !window.Contains(round)) return false;
+        for (var w = 0; w < design.Windows.Count; w++)
+            if (design.Windows[w].Arm == arm && !design.Windows[w].Contains(round)) return false;
         return true;
     }
 
-    public static StockLimit? StockOf(CheckedDesign design, int arm) => design.Stocks.FirstOrDefault(s => s.Arm == arm);
+    public static StockLimit? StockOf(CheckedDesign design, int arm)
+    {
+        for (var s = 0; s < design.Stocks.Count; s++)
+            if (design.Stocks[s].Arm == arm) return design.Stocks[s];
+        return null;
+    }
+
+    private static bool Targets(BoundLimit limit, int arm)
+    {
+        for (var k = 0; k < limit.Arms.Count; k++) if (limit.Arms[k] == arm) return true;
+        return false;
+    }
 
     /// <summary>The plots an arm's minimums need in the rounds after <paramref name="round"/>, if it stays in the trial.</summary>
     public static int FutureMinimums(CheckedDesign design, int arm, int round)

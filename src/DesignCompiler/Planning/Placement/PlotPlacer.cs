@@ -21,31 +21,58 @@ public static class PlotPlacer
 {
     public static PlacementResult Place(CheckedDesign design, int round, int[,] counts, RotationRules? rules = null)
     {
-        var result = new List<PlotAssignment>(design.PlotsPerRound);
+        var blocks = design.Blocks.Count;
+        var flat = new int[design.Arms.Count * blocks];
+        for (var i = 0; i < design.Arms.Count; i++)
+            for (var j = 0; j < blocks; j++) flat[i * blocks + j] = counts[i, j];
+        var arms = new int[design.PlotsPerRound];
+        var problem = PlaceArms(design, round, flat, rules, arms);
+        if (problem is not null) return new PlacementResult(null, problem);
+
+        var result = new List<PlotAssignment>(arms.Length);
         var offset = 0;
         foreach (var block in design.Blocks)
         {
-            var arms = new int[block.Plots];
-            var k = 0;
-            for (var i = 0; i < design.Arms.Count; i++)
-                for (var c = 0; c < counts[i, block.Index]; c++) arms[k++] = i;
-
-            var rng = new Xoshiro256StarStar(StreamSeed.Derive(design.Seed, StreamPurpose.Placement, (ulong)round, (ulong)block.Index));
-            Shuffle.FisherYates<int>(arms, ref rng);
-
-            if (rules is { Any: true })
-            {
-                var problem = Repair(design, block, offset, arms, rules, ref rng);
-                if (problem is not null)
-                    return new PlacementResult(null, FormattableString.Invariant($"round {round}, block {block.Name}: {problem}"));
-            }
-
             for (var plot = 0; plot < block.Plots; plot++)
-                result.Add(new PlotAssignment(block.Name, block.Index, plot, block.PlotId(plot), block.RowOf(plot), block.ColumnOf(plot),
-                    arms[plot], design.Arms[arms[plot]].Code));
+            {
+                var arm = arms[offset + plot];
+                result.Add(new PlotAssignment(block.Name, block.Index, plot, block.PlotId(plot), block.RowOf(plot), block.ColumnOf(plot), arm, design.Arms[arm].Code));
+            }
             offset += block.Plots;
         }
         return new PlacementResult(result, null);
+    }
+
+    /// <summary>
+    /// The placement as the arm on every plot (design order), for callers that need no plot records: the
+    /// simulator. <paramref name="counts"/> is row-major (arm · blocks + block). Returns the problem when the
+    /// rotation rules leave some arm too few plots, otherwise null.
+    /// </summary>
+    public static string? PlaceArms(CheckedDesign design, int round, ReadOnlySpan<int> counts, RotationRules? rules, Span<int> armOfPlot)
+    {
+        var blocks = design.Blocks.Count;
+        var offset = 0;
+        for (var b = 0; b < blocks; b++)
+        {
+            var block = design.Blocks[b];
+            var arms = armOfPlot.Slice(offset, block.Plots);
+            var k = 0;
+            for (var i = 0; i < design.Arms.Count; i++)
+                for (var c = 0; c < counts[i * blocks + block.Index]; c++) arms[k++] = i;
+
+            var rng = new Xoshiro256StarStar(StreamSeed.Derive(design.Seed, StreamPurpose.Placement, (ulong)round, (ulong)block.Index));
+            Shuffle.FisherYates(arms, ref rng);
+
+            if (rules is { Any: true })
+            {
+                var repaired = arms.ToArray();
+                var problem = Repair(design, block, offset, repaired, rules, ref rng);
+                if (problem is not null) return FormattableString.Invariant($"round {round}, block {block.Name}: {problem}");
+                repaired.CopyTo(arms);
+            }
+            offset += block.Plots;
+        }
+        return null;
     }
 
     /// <summary>Moves arms off plots where they may not grow; null when every arm found a plot.</summary>

@@ -23,8 +23,12 @@ public sealed class RotationRules
 
     public bool Any { get; private init; }
 
+    // Rules that forbid nothing: what every round of a design without rotation rules gets, without allocating.
+    private static readonly RotationRules None = new(new bool[0, 0], new string?[0, 0]) { Any = false };
+
     public static RotationRules For(CheckedDesign design, int round, IReadOnlyList<int[]> history)
     {
+        if (design.RestRules.Count == 0 && design.AfterRules.Count == 0) return None;
         var plots = design.PlotsPerRound;
         var arms = design.Arms.Count;
         var forbidden = new bool[plots, arms];

@@ -7,8 +7,9 @@ namespace DesignCompiler.Planning.Policies;
 /// What a policy may look at when it shares out a round: the design, the round, which arms
 /// may be sown, each arm's posterior of its value (in ranking units: larger is better), its
 /// probability of being best among the arms that may be sown, and the plots recorded so far.
+/// A struct, so that asking a policy for shares allocates nothing.
 /// </summary>
-public sealed record PolicyContext(
+public readonly record struct PolicyContext(
     CheckedDesign Design,
     int Round,
     int PlotsThisRound,

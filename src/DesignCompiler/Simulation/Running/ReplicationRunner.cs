@@ -21,7 +21,10 @@ public sealed class ReplicationRunner
     private readonly Xoshiro256StarStar[] _armStreams;
     private readonly ulong[] _armKeys;
     private readonly int[] _inTrial;
+    private readonly PlanWorkspace _workspace;
+    private readonly PlanWorkspace _finalWorkspace;
     private readonly FieldShifts _shifts;
+    private readonly int[] _blockOfPlot;
 
     public ReplicationRunner(RoundPlanner planner)
     {
@@ -32,7 +35,11 @@ public sealed class ReplicationRunner
         _armStreams = new Xoshiro256StarStar[arms];
         _armKeys = _design.Arms.Select(a => SimulationStreams.Key(a.Code)).ToArray();
         _inTrial = new int[arms];
+        _workspace = new PlanWorkspace(_design);
+        _finalWorkspace = new PlanWorkspace(_design);
         _shifts = new FieldShifts(_design);
+        // Plots come in design order, block by block.
+        _blockOfPlot = _design.Blocks.SelectMany((b, j) => Enumerable.Repeat(j, b.Plots)).ToArray();
     }
 
     public CheckedDesign Design => _design;
@@ -61,11 +68,12 @@ public sealed class ReplicationRunner
         _shifts.BeginTrial(world.Effects, seed, replication, world.Key);
 
         _state.Reset();
+        var workspace = _workspace;
         for (var round = 1; round <= _design.Rounds; round++)
         {
-            var result = _planner.Plan(_state, round);
-            if (result.Plan is not { } plan)
+            if (!_planner.Decide(_state, round, workspace))
             {
+                var result = _planner.ResultOf(_state, round, workspace);
                 if (result.StopReason is not null) record.Ending = TrialEnding.Stopped;
                 else
                 {
@@ -74,10 +82,10 @@ public sealed class ReplicationRunner
                 }
                 break;
             }
-            if (round > 1) record.LeaderAfterRound[round - 2] = LeaderOf(plan);
+            if (round > 1) record.LeaderAfterRound[round - 2] = LeaderOf(workspace.Summary.ProbabilityBest);
             _shifts.BeginRound();
-            Sow(plan, round - 1, record);
-            _state.Issue(plan);
+            Sow(workspace.ArmOfPlot, round - 1, record);
+            _state.Issue(workspace.Totals, workspace.Dropped, workspace.ArmOfPlot);
             _state.RoundsCompleted = round;
             record.RoundsRun = round;
         }
@@ -92,41 +100,42 @@ public sealed class ReplicationRunner
         }
     }
 
-    private void Sow(RoundPlan plan, int roundIndex, ReplicationRecord record)
+    private void Sow(int[] armOfPlot, int roundIndex, ReplicationRecord record)
     {
         var outcome = _design.Outcome;
         var regret = 0.0;
-        foreach (var plot in plan.Assignments)
+        for (var k = 0; k < armOfPlot.Length; k++)
         {
-            var arm = plot.Arm;
+            var arm = armOfPlot[k];
+            var block = _blockOfPlot[k];
             record.Plots[arm, roundIndex]++;
             if (_shifts.Active)
             {
                 // The plot was sown (it counts against stock and regret) but may give no result.
                 var lost = _shifts.IsLost(arm);
-                var theta = _shifts.Theta(arm, plot.BlockIndex, record.TrueMean[arm]);
+                var theta = _shifts.Theta(arm, block, record.TrueMean[arm]);
                 if (outcome.Family == OutcomeFamily.Count) theta = _shifts.MixCount(arm, theta, ref _armStreams[arm]);
                 var shifted = OutcomeDraw.Draw(outcome, ref _armStreams[arm], theta, record.NoiseSd[arm]);
-                if (!lost) _state.Record(arm, shifted, plot.BlockIndex, roundIndex + 1);
+                if (!lost) _state.Record(arm, shifted, block, roundIndex + 1);
             }
             else
             {
                 var y = OutcomeDraw.Draw(outcome, ref _armStreams[arm], record.TrueMean[arm], record.NoiseSd[arm]);
-                _state.Record(arm, y, plot.BlockIndex, roundIndex + 1);
+                _state.Record(arm, y, block, roundIndex + 1);
             }
             regret += record.BestValue - record.Value[arm];
             if (!record.IsBest(arm)) record.NonBestPlots++;
         }
         record.RoundRegret[roundIndex] = regret;
-        record.PlotsSown += plan.Assignments.Count;
+        record.PlotsSown += armOfPlot.Length;
     }
 
     /// <summary>The planner's leader: highest P(best), the lowest index among ties (as <see cref="BestArmSummary.Leader"/>).</summary>
-    private static int LeaderOf(RoundPlan plan)
+    private static int LeaderOf(double[] probabilityBest)
     {
         var leader = 0;
-        for (var i = 1; i < plan.Arms.Count; i++)
-            if (plan.Arms[i].ProbabilityBest > plan.Arms[leader].ProbabilityBest) leader = i;
+        for (var i = 1; i < probabilityBest.Length; i++)
+            if (probabilityBest[i] > probabilityBest[leader]) leader = i;
         return leader;
     }
 
@@ -138,11 +147,26 @@ public sealed class ReplicationRunner
     private void FinalSelection(ReplicationRecord record)
     {
         var arms = _design.Arms.Count;
+        if (_design.Model.IsAdjusted)
+        {
+            // The adjusted model's joint posterior: through the planner's belief (allocates; the integration dominates).
+            var inTrial = Enumerable.Range(0, arms).Where(i => !_state.Dropped[i]).ToList();
+            var summary = _planner.Believe(_state).Summarize(inTrial);
+            summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
+            for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = summary.Leader;
+            return;
+        }
+        var model = _planner.Model;
+        var ws = _finalWorkspace;
         var count = 0;
         for (var i = 0; i < arms; i++)
+        {
+            var arm = _design.Arms[i];
+            ws.UpdatePosterior(i, model, arm.Prior, _design.Valuation.Scale, -arm.Cost, _state.Statistics[i]);
             if (!_state.Dropped[i]) _inTrial[count++] = i;
-        var summary = _planner.Believe(_state).Summarize(new ArraySegment<int>(_inTrial, 0, count));
-        summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
-        for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = summary.Leader;
+        }
+        BestArmSummary.Compute(ws.Values, _inTrial.AsSpan(0, count), ws.Subset, ws.Summary);
+        ws.Summary.ProbabilityBest.CopyTo(record.FinalProbabilityBest, 0);
+        for (var r = Math.Max(record.RoundsRun - 1, 0); r < record.Rounds; r++) record.LeaderAfterRound[r] = ws.Summary.Leader;
     }
 }
