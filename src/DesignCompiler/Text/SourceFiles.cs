@@ -17,13 +17,7 @@ public static class SourceFiles
             if (!info.Exists) return Fail(path, "no such file");
             if (info.Length > maxBytes)
                 return Fail(path, FormattableString.Invariant($"it is {info.Length:N0} bytes; the limit is {maxBytes:N0}"));
-            var bytes = File.ReadAllBytes(path);
-            if (Array.IndexOf(bytes, (byte)0) >= 0) return Fail(path, "it is a binary file, not text");
-            return (new SourceText(path, StrictUtf8.GetString(bytes)), null);
-        }
-        catch (DecoderFallbackException)
-        {
-            return Fail(path, "it is not UTF-8 text; save it as UTF-8");
+            return Decode(path, File.ReadAllBytes(path));
         }
         catch (UnauthorizedAccessException)
         {
@@ -32,6 +26,20 @@ public static class SourceFiles
         catch (IOException e)
         {
             return Fail(path, e.Message);
+        }
+    }
+
+    /// <summary>The text of a file's bytes, as <see cref="Read"/> takes them; the fuzz harness feeds bytes here directly.</summary>
+    public static (SourceText? Text, Diagnostic? Problem) Decode(string path, byte[] bytes)
+    {
+        if (Array.IndexOf(bytes, (byte)0) >= 0) return Fail(path, "it is a binary file, not text");
+        try
+        {
+            return (new SourceText(path, StrictUtf8.GetString(bytes)), null);
+        }
+        catch (DecoderFallbackException)
+        {
+            return Fail(path, "it is not UTF-8 text; save it as UTF-8");
         }
     }
 
