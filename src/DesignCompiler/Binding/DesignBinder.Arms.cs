@@ -18,8 +18,9 @@ public sealed partial class DesignBinder
 
         if (statements.Count > DesignLimits.MaxArms)
         {
-            Report(DiagnosticCatalog.OutOfRange, statements[DesignLimits.MaxArms].Code.Span, "the number of arms",
-                FormattableString.Invariant($"at most {DesignLimits.MaxArms}"), statements.Count);
+            ReportWithHint(DiagnosticCatalog.OutOfRange, statements[DesignLimits.MaxArms].Code.Span,
+                "no field trial sows this many arms at once; screen them in several trials, or remove arms from this one",
+                "the number of arms", FormattableString.Invariant($"at most {DesignLimits.MaxArms}"), statements.Count);
             return arms;
         }
 

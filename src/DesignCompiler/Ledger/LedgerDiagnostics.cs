@@ -19,6 +19,7 @@ public static class LedgerDiagnostics
     public static readonly DiagnosticDescriptor HeaderMismatch = Error("TD4004", "{0}");
     public static readonly DiagnosticDescriptor CsvMalformed = Error("TD4005", "{0}");
     public static readonly DiagnosticDescriptor NoRows = Error("TD4007", "the sheet has its header but no plot rows; return the sheet with the outcomes filled in");
+    public static readonly DiagnosticDescriptor TooManyRows = Error("TD4009", "the sheet has more than {0} rows; the largest issued round has {1} plots, so this is not a results sheet of this trial (check the file, or remove the rows below the plots)");
     public static readonly DiagnosticDescriptor FieldCount = Error("TD4006", "this row has {0} fields; a sheet row has {1}: {2}");
 
     public static readonly DiagnosticDescriptor RoundNotWhole = Error("TD4010", "round '{0}' is not a round number");

@@ -17,10 +17,18 @@ namespace DesignCompiler.Results;
 /// </summary>
 public static partial class ResultSheetChecker
 {
+    /// <summary>
+    /// Spreadsheets add empty rows below the data (tested: they are skipped); this many are allowed
+    /// beyond a header and one row per plot before the file is taken for something else.
+    /// </summary>
+    public const int BlankRowAllowance = 10_000;
+
     public static (CheckedSheet? Sheet, IReadOnlyList<Diagnostic> Diagnostics) Check(
         SourceText text, IReadOnlyList<IssuedSheet> issued, OutcomeSpec outcome, IOutcomeModel model)
     {
-        var (records, problems) = CsvReader.Read(text);
+        var largest = issued.Count == 0 ? 0 : issued.Max(s => s.Plots.Count);
+        var (records, problems) = CsvReader.Read(text, largest + 1 + BlankRowAllowance, at =>
+            new Diagnostic(LedgerDiagnostics.TooManyRows, At(text, new TextSpan(at, 0)), [largest + 1 + BlankRowAllowance, largest]));
         if (problems.Count > 0) return (null, problems);
 
         var bag = new DiagnosticBag();

@@ -97,6 +97,7 @@ internal static class OutputInvariants
                 {
                     using var document = JsonDocument.Parse(text);
                     JsonNumbers(document.RootElement, name, problems);
+                    JsonProbabilities(document.RootElement, name, problems);
                 }
                 catch (JsonException e)
                 {
@@ -113,12 +114,38 @@ internal static class OutputInvariants
     /// <summary>How .NET, C and JavaScript print a number that is not finite.</summary>
     private static readonly string[] NonFiniteWords = ["NaN", "Infinity", "\u221E", "inf,", "nan,"];
 
+    private static readonly HashSet<string> AlwaysNumbers =
+        ["probabilityBest", "posteriorMean", "expectedLoss", "targetShare", "probabilityBestErrorBound"];
+
+    /// <summary>Every "arms" list: each probabilityBest in [0, 1], and together 1 within <see cref="SumTolerance"/>.</summary>
+    private static void JsonProbabilities(JsonElement root, string name, List<string> problems)
+    {
+        if (root.ValueKind != JsonValueKind.Object || !root.TryGetProperty("arms", out var arms) || arms.ValueKind != JsonValueKind.Array) return;
+        var probabilities = arms.EnumerateArray()
+            .Where(a => a.ValueKind == JsonValueKind.Object && a.TryGetProperty("probabilityBest", out var p) && p.ValueKind == JsonValueKind.Number)
+            .Select(a => a.GetProperty("probabilityBest").GetDouble()).ToList();
+        if (probabilities.Count == 0) return;
+        foreach (var p in probabilities)
+            if (p is < 0 or > 1) problems.Add($"{name} has a probability of being best of {p:R}, outside [0, 1]");
+        var sum = probabilities.Sum();
+        if (sum > 0 && Math.Abs(sum - 1) > SumTolerance) problems.Add($"{name}: the probabilities of being best sum to {sum:R}");
+    }
+
     private static void JsonNumbers(JsonElement element, string name, List<string> problems)
     {
         switch (element.ValueKind)
         {
             case JsonValueKind.Object:
-                foreach (var property in element.EnumerateObject()) JsonNumbers(property.Value, name, problems);
+                foreach (var property in element.EnumerateObject())
+                {
+                    // The renderers write null for a number that is not finite; for these figures that is never right.
+                    if (AlwaysNumbers.Contains(property.Name) && property.Value.ValueKind == JsonValueKind.Null)
+                        problems.Add($"{name} has \"{property.Name}\": null");
+                    if (property.Name == "credibleInterval" && property.Value.ValueKind == JsonValueKind.Array
+                        && property.Value.EnumerateArray().Any(v => v.ValueKind != JsonValueKind.Number))
+                        problems.Add($"{name} has a credible interval that is not two numbers");
+                    JsonNumbers(property.Value, name, problems);
+                }
                 break;
             case JsonValueKind.Array:
                 foreach (var item in element.EnumerateArray()) JsonNumbers(item, name, problems);
