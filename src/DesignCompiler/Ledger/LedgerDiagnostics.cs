@@ -42,7 +42,7 @@ public static class LedgerDiagnostics
     // --- TD41xx: the ledger ------------------------------------------------------
     public static readonly DiagnosticDescriptor LedgerUnreadable = Error("TD4101", "cannot open the ledger: {0}");
     public static readonly DiagnosticDescriptor NotALedger = Error("TD4102", "this is not a trial ledger: {0}");
-    public static readonly DiagnosticDescriptor LedgerLocked = Error("TD4103", "the ledger is busy: another trialc has held its write lock for over {0} s; try again when that command has finished");
+    public static readonly DiagnosticDescriptor LedgerLocked = Error("TD4103", "the ledger is busy: another trialc, or another program that has the file open, has held its lock for over {0} s; try again when that command has finished, or close the program");
     public static readonly DiagnosticDescriptor LedgerChanged = Error("TD4104", "the ledger was changed outside trialc: {0}");
     public static readonly DiagnosticDescriptor LedgerMissing = Error("TD4105", "there is no ledger here; 'trialc compile DESIGN --ledger {0} --out DIR' starts one with round 1");
     public static readonly DiagnosticDescriptor SchemaTooNew = Error("TD4106", "the ledger has schema version {0}; this trialc reads version {1}: use a newer trialc");
