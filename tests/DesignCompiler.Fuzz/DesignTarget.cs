@@ -59,11 +59,3 @@ internal sealed class DesignTarget : IFuzzTarget
             .Any(s => s.Contains("NaN", StringComparison.Ordinal) || s.Contains("Infinity", StringComparison.Ordinal)
                 || s.Contains('\u221E') || s.Contains("inf,", StringComparison.Ordinal) || s.Contains("nan,", StringComparison.Ordinal));
 }
-
-internal static class Findings
-{
-    public static void ThrowIfAny(List<string> problems)
-    {
-        if (problems.Count > 0) throw new FuzzFinding(string.Join("\n", problems));
-    }
-}

@@ -22,6 +22,3 @@ internal interface IFuzzTarget
 
     void Run(byte[] input);
 }
-
-/// <summary>An input the tool mishandled without throwing: a position outside the text, NaN in a plan, and so on.</summary>
-internal sealed class FuzzFinding(string message) : Exception(message);
