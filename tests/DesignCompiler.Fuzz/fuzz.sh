@@ -37,7 +37,10 @@ export AFL_SKIP_BIN_CHECK=1 AFL_NO_AFFINITY=1 AFL_SKIP_CPUFREQ=1 AFL_I_DONT_CARE
 # Resume where an earlier run stopped, if there was one.
 input=(-i "$seeds")
 [ -d "$findings/default/queue" ] && input=(-i -)
-taskset -c 0 nice -n 10 afl-fuzz "${input[@]}" -o "$findings" -t 1000 -m none -V "$seconds" \
+# A dictionary of the input's tokens, when there is one.
+dictionary=()
+[ -f "tests/DesignCompiler.Fuzz/$target.dict" ] && dictionary=(-x "tests/DesignCompiler.Fuzz/$target.dict")
+taskset -c 0 nice -n 10 afl-fuzz "${input[@]}" "${dictionary[@]}" -o "$findings" -t 1000 -m none -V "$seconds" \
   -- dotnet "$bin/DesignCompiler.Fuzz.dll" "$target"
 
 echo "fuzz.sh: $target: $(grep -E '^execs_done' "$findings/default/fuzzer_stats")," \

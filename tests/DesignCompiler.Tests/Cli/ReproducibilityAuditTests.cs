@@ -27,8 +27,8 @@ public sealed class ReproducibilityAuditTests
 
         var names = Files(german.Folder);
         Assert.Equal(names, Files(plain.Folder));
-        // Four rounds of four files, three status reports, the export, two simulation reports.
-        Assert.Equal(16 + 3 + 1 + 2, names.Count);
+        // Four rounds of four files, three status reports, the export, verify's report, two simulation reports.
+        Assert.Equal(16 + 3 + 1 + 1 + 2, names.Count);
         foreach (var name in names)
             Assert.True(File.ReadAllBytes(Path.Combine(german.Folder, name)).AsSpan().SequenceEqual(File.ReadAllBytes(Path.Combine(plain.Folder, name))),
                 name + " differs between the two runs");
@@ -74,6 +74,7 @@ public sealed class ReproducibilityAuditTests
             foreach (var format in new[] { "text", "json", "html" })
                 File.WriteAllText(Out("status." + format), Trialc("status", Design, "--ledger", Ledger, "--format", format));
             Trialc("export", "--ledger", Ledger, "--out", Out("export.csv"));
+            File.WriteAllText(Out("verify.txt"), Trialc("verify", "--ledger", Ledger).Replace(Folder, "FOLDER", StringComparison.Ordinal));
             var threads = _threads.ToString(CultureInfo.InvariantCulture);
             Trialc("simulate", Design, "--reps", "40", "--threads", threads, "--format", "json", "--out", Out("simulation.json"));
             Trialc("simulate", Design, "--reps", "40", "--threads", threads, "--format", "html", "--out", Out("simulation.html"));
