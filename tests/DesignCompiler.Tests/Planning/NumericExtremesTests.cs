@@ -59,7 +59,7 @@ public sealed class NumericExtremesTests
         // Arm A: 3 successes in 5 plots; arms B and C nothing recorded, so still Beta(0.01, 0.01).
         var plan = PlanAndRender(Bernoulli("beta(0.01, 0.01)"), state => RecordEach(state, 0, 5, k => k < 3 ? 1 : 0));
         var a = plan.Arms[0];
-        // Posterior mean (0.01 + 3) / (0.02 + 5): the beta-binomial conjugate update (Gelman et al., BDA, ch. 2).
+        // Posterior mean (0.01 + 3) / (0.02 + 5): the beta-binomial conjugate update (Gelman et al., BDA, ch. 2; chapter from memory).
         Assert.Equal(3.01 / 5.02, a.PosteriorMean, 12);
         // B and C are identical, so P(best) is shared equally between them (symmetry; common practice).
         Assert.Equal(plan.Arms[1].ProbabilityBest, plan.Arms[2].ProbabilityBest, 12);
@@ -120,6 +120,8 @@ public sealed class NumericExtremesTests
         {
             for (var arm = 0; arm < state.Statistics.Length; arm++) RecordEach(state, arm, state.PlotsIssued[arm], _ => yield);
         });
+        // The posterior mean (kappa0 mu0 + n xbar) / (kappa0 + n) lies between the prior mean and the data mean
+        // (Murphy 2007, eq. 86); the priors' means are 5.5 to 8.1.
         foreach (var arm in plan.Arms.Where(a => a.PlotsRecorded > 0))
             Assert.InRange(arm.PosteriorMean, Math.Min(yield, 5.5) - 1e-9, Math.Max(yield, 8.1) + 1e-9);
     }
@@ -153,7 +155,7 @@ public sealed class NumericExtremesTests
         using var json = JsonDocument.Parse(File.ReadAllText(Path.Combine(trial.OutFolder(2), "aphid-margins-round2.json")));
         foreach (var arm in json.RootElement.GetProperty("arms").EnumerateArray())
         {
-            // Gamma(2, 0.1) prior, n plots all 0: posterior Gamma(2, 0.1 + n), mean 2 / (0.1 + n) (gamma-Poisson conjugate; Gelman et al., BDA, ch. 2).
+            // Gamma(2, 0.1) prior, n plots all 0: posterior Gamma(2, 0.1 + n), mean 2 / (0.1 + n) (gamma-Poisson conjugate; Gelman et al., BDA, ch. 2, chapter from memory).
             var n = arm.GetProperty("plotsRecorded").GetInt32();
             Assert.Equal(2 / (0.1 + n), arm.GetProperty("posteriorMean").GetDouble(), 12);
         }
