@@ -21,6 +21,11 @@ public static class RoundOutputs
     /// as Markdown, the round report (STEM-roundN-report.html) and one file for each of the user's
     /// templates (STEM-roundN.NAME). Nothing is returned when any template fails.
     /// </summary>
+    /// <summary>Every built-in file of a round, without an issue date, with the report's charts drawn from the priors.</summary>
+    public static (IReadOnlyList<(string Name, byte[] Content)> Files, IReadOnlyList<Diagnostic> Diagnostics) Render(
+        RoundPlan plan, CheckedDesign design, string stem) =>
+        Render(plan, design, stem, null, RoundFigures.FromDesign(design));
+
     public static (IReadOnlyList<(string Name, byte[] Content)> Files, IReadOnlyList<Diagnostic> Diagnostics) Render(
         RoundPlan plan, CheckedDesign design, string stem, string? dateIssued, RoundFigures figures, IReadOnlyList<UserTemplate>? templates = null)
     {

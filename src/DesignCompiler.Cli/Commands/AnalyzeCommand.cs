@@ -61,7 +61,7 @@ internal static class AnalyzeCommand
         IReadOnlyList<AnalysisPlot> plots;
         if (dataPath is not null)
         {
-            var (text, problem) = SourceFiles.Read(dataPath, MaxDataBytes);
+            var (text, problem) = SourceFiles.Read(dataPath, MaxDataBytes, "a results data file");
             if (text is null)
             {
                 console.Report([problem!]);

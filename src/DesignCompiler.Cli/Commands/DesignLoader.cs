@@ -8,12 +8,9 @@ namespace DesignCompiler.Cli.Commands;
 /// <summary>Read, parse, bind and check a design file: the first steps of every command.</summary>
 internal static class DesignLoader
 {
-    /// <summary>Design files are small; anything over this is the wrong file.</summary>
-    public const long MaxDesignBytes = 4 * 1024 * 1024;
-
     public static (CheckedDesign? Design, IReadOnlyList<Diagnostic> Diagnostics) Load(string path)
     {
-        var (text, problem) = SourceFiles.Read(path, MaxDesignBytes);
+        var (text, problem) = SourceFiles.Read(path, DesignLimits.MaxDesignFileBytes, "a design file");
         if (text is null) return (null, [problem!]);
         var bound = DesignBinder.Check(text);
         if (bound.Design is null) return (null, bound.Diagnostics);

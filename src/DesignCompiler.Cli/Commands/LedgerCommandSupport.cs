@@ -12,6 +12,13 @@ internal static class LedgerCommandSupport
     /// <summary>Tests only: milliseconds to hold each ledger write transaction open before it commits.</summary>
     public const string PauseVariable = "TRIALC_TEST_PAUSE_IN_TRANSACTION_MS";
 
+    /// <summary>
+    /// Tests only: the instant every ledger entry records as its time, as <c>2026-04-01T08:00:00Z</c>.
+    /// The ledger, its export and the printed sheets' issue date are the only outputs that carry the
+    /// time; with this set, two runs of a workflow in separate processes can be compared byte for byte.
+    /// </summary>
+    public const string ClockVariable = "TRIALC_TEST_CLOCK";
+
     /// <summary>The ledger beside the design: same folder, same name, extension <c>.ledger</c>.</summary>
     public static string DefaultPath(string designPath) => Path.ChangeExtension(designPath, ".ledger");
 
@@ -20,8 +27,14 @@ internal static class LedgerCommandSupport
     {
         var user = new[] { Environment.GetEnvironmentVariable("USER"), Environment.GetEnvironmentVariable("USERNAME"), Environment.UserName }
             .FirstOrDefault(u => !string.IsNullOrWhiteSpace(u)) ?? "unknown";
-        return new LedgerActor(user.Trim(), TimeProvider.System.GetUtcNow(), RoundOutputs.ToolVersion);
+        return new LedgerActor(user.Trim(), Now(), RoundOutputs.ToolVersion);
     }
+
+    private static DateTimeOffset Now() =>
+        DateTimeOffset.TryParseExact(Environment.GetEnvironmentVariable(ClockVariable), "yyyy-MM-dd'T'HH:mm:ss'Z'",
+            CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal | DateTimeStyles.AdjustToUniversal, out var fixedNow)
+            ? fixedNow
+            : TimeProvider.System.GetUtcNow();
 
     public static LedgerOptions Options(CliConsole console)
     {

@@ -36,7 +36,7 @@ internal static class MergeCommand
         var problems = new List<Diagnostic>();
         foreach (var path in paths)
         {
-            var (text, problem) = SourceFiles.Read(path, MaxPartBytes);
+            var (text, problem) = SourceFiles.Read(path, MaxPartBytes, "a simulation part");
             if (text is null)
             {
                 problems.Add(problem!);

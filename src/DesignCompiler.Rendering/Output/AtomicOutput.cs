@@ -7,7 +7,15 @@ namespace DesignCompiler.Rendering.Output;
 /// </summary>
 public static class AtomicOutput
 {
-    public static string? WriteAll(string directory, IReadOnlyList<(string Name, byte[] Content)> files)
+    public static string? WriteAll(string directory, IReadOnlyList<(string Name, byte[] Content)> files) =>
+        WriteAll(directory, files, OpenTemporary);
+
+    /// <summary>
+    /// As <see cref="WriteAll(string, IReadOnlyList{ValueTuple{string, byte[]}})"/>, with the temporary files opened by
+    /// <paramref name="open"/>: tests pass a stream that fails part-way, as a full disk or a pulled
+    /// drive does, and check that nothing is left under a final name or a temporary one.
+    /// </summary>
+    public static string? WriteAll(string directory, IReadOnlyList<(string Name, byte[] Content)> files, Func<string, Stream> open)
     {
         var temporaries = new List<(string Temporary, string Final)>();
         try
@@ -18,10 +26,11 @@ public static class AtomicOutput
                 var final = Path.Combine(directory, name);
                 var temporary = Path.Combine(directory, "." + name + ".partial-" + Environment.ProcessId);
                 temporaries.Add((temporary, final));
-                using (var stream = new FileStream(temporary, FileMode.Create, FileAccess.Write, FileShare.None))
+                using (var stream = open(temporary))
                 {
                     stream.Write(content);
-                    stream.Flush(flushToDisk: true);
+                    if (stream is FileStream file) file.Flush(flushToDisk: true);
+                    else stream.Flush();
                 }
             }
             foreach (var (temporary, final) in temporaries) File.Move(temporary, final, overwrite: true);
@@ -36,4 +45,6 @@ public static class AtomicOutput
             return e is UnauthorizedAccessException ? $"permission denied writing to {directory}" : e.Message;
         }
     }
+
+    private static Stream OpenTemporary(string path) => new FileStream(path, FileMode.Create, FileAccess.Write, FileShare.None);
 }

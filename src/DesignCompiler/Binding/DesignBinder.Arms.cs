@@ -18,8 +18,9 @@ public sealed partial class DesignBinder
 
         if (statements.Count > DesignLimits.MaxArms)
         {
-            Report(DiagnosticCatalog.OutOfRange, statements[DesignLimits.MaxArms].Code.Span, "the number of arms",
-                FormattableString.Invariant($"at most {DesignLimits.MaxArms}"), statements.Count);
+            ReportWithHint(DiagnosticCatalog.OutOfRange, statements[DesignLimits.MaxArms].Code.Span,
+                "no field trial sows this many arms at once; screen them in several trials, or remove arms from this one",
+                "the number of arms", FormattableString.Invariant($"at most {DesignLimits.MaxArms}"), statements.Count);
             return arms;
         }
 
@@ -80,7 +81,7 @@ public sealed partial class DesignBinder
         if (!valuation.HasPrice && !IsBroken("price"))
             ReportWithHint(DiagnosticCatalog.CostWithoutPrice, costs[0].Span,
                 "add a line such as 'price 180 \"EUR\"' (money per outcome unit)", statement.Code.Name);
-        return Finite(costs[0].Cost, "an arm's cost") ?? 0;
+        return Between(costs[0].Cost, "an arm's cost", -DesignLimits.MaxCost, DesignLimits.MaxCost) ?? 0;
     }
 
     /// <summary>A checked prior, or null after reporting that it does not fit the outcome or has bad parameters.</summary>
@@ -95,22 +96,22 @@ public sealed partial class DesignBinder
         switch (prior)
         {
             case BetaPriorSyntax beta:
-                var a = Positive(beta.A, "a beta prior's a");
-                var b = Positive(beta.B, "a beta prior's b");
+                var a = PriorParameter(beta.A, "a beta prior's a");
+                var b = PriorParameter(beta.B, "a beta prior's b");
                 return a is null || b is null ? null : new BetaPriorSpec(a.Value, b.Value, prior.Span);
             case NormalPriorSyntax normal:
-                var mean = Finite(normal.Mean, "a normal prior's mean");
-                var sd = Positive(normal.Sd, "a normal prior's sd");
-                var noise = normal.Noise is null ? null : Positive(normal.Noise, "a normal prior's noise guess");
-                var worth = normal.Worth is null ? null : Positive(normal.Worth, "the plots' worth of a noise guess");
+                var mean = Between(normal.Mean, "a normal prior's mean", -DesignLimits.MaxMagnitude, DesignLimits.MaxMagnitude);
+                var sd = Scale(normal.Sd, "a normal prior's sd");
+                var noise = normal.Noise is null ? null : Scale(normal.Noise, "a normal prior's noise guess");
+                var worth = normal.Worth is null ? null : Between(normal.Worth, "the plots' worth of a noise guess", DesignLimits.MinWorth, DesignLimits.MaxWorth);
                 if (normal.Noise is not null && outcome?.NoiseSd is { } known)
                     Report(DiagnosticCatalog.NoiseGuessUnused, normal.Noise.Span, FormattableString.Invariant($"noise sd {known}"));
                 if (mean is null || sd is null || (normal.Noise is not null && noise is null) || (normal.Worth is not null && worth is null))
                     return null;
                 return new NormalPriorSpec(mean.Value, sd.Value, noise, worth, prior.Span);
             case GammaPriorSyntax gamma:
-                var shape = Positive(gamma.Shape, "a gamma prior's shape");
-                var rate = Positive(gamma.Rate, "a gamma prior's rate");
+                var shape = PriorParameter(gamma.Shape, "a gamma prior's shape");
+                var rate = PriorParameter(gamma.Rate, "a gamma prior's rate");
                 return shape is null || rate is null ? null : new GammaPriorSpec(shape.Value, rate.Value, prior.Span);
             default:
                 return null;

@@ -34,8 +34,9 @@ public sealed partial class DesignBinder
 
         if (blocks.Count > DesignLimits.MaxBlocks)
         {
-            Report(DiagnosticCatalog.OutOfRange, blocks[DesignLimits.MaxBlocks].Span, "the number of blocks",
-                FormattableString.Invariant($"at most {DesignLimits.MaxBlocks}"), blocks.Count);
+            ReportWithHint(DiagnosticCatalog.OutOfRange, blocks[DesignLimits.MaxBlocks].Span,
+                "merge neighbouring blocks, or split the field into several trials",
+                "the number of blocks", FormattableString.Invariant($"at most {DesignLimits.MaxBlocks}"), blocks.Count);
             return null;
         }
 

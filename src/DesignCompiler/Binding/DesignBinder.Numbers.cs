@@ -42,4 +42,13 @@ public sealed partial class DesignBinder
     private double? Probability(NumberSyntax number, string what) => Real(number, what, "between 0 and 1", v => v is >= 0 and <= 1);
 
     private double? Finite(NumberSyntax number, string what) => Real(number, what, "a finite number", _ => true);
+
+    /// <summary>A number in [<paramref name="min"/>, <paramref name="max"/>], the range named in the message (see <see cref="DesignLimits"/> for why).</summary>
+    private double? Between(NumberSyntax number, string what, double min, double max) =>
+        Real(number, what, $"between {DesignLimits.Text(min)} and {DesignLimits.Text(max)}", v => v >= min && v <= max);
+
+    private double? PriorParameter(NumberSyntax number, string what) =>
+        Between(number, what, DesignLimits.MinPriorParameter, DesignLimits.MaxPriorParameter);
+
+    private double? Scale(NumberSyntax number, string what) => Between(number, what, DesignLimits.MinScale, DesignLimits.MaxMagnitude);
 }

@@ -26,7 +26,7 @@ public sealed partial class DesignBinder
                 double? sd = null;
                 if (normal.NoiseSd is { } written)
                 {
-                    sd = Positive(written, "the noise sd");
+                    sd = Scale(written, "the noise sd");
                     if (sd is null) return null;
                 }
                 return new OutcomeSpec(statement.Name.Name, unit, OutcomeFamily.Normal, 1, sd, statement.Span);
@@ -38,7 +38,7 @@ public sealed partial class DesignBinder
     private Valuation BindValuation(GoalStatementSyntax? goal, PriceStatementSyntax? price)
     {
         var direction = goal?.Direction.Keyword == "minimize" ? Goal.Minimize : Goal.Maximize;
-        double? value = price is null ? null : Positive(price.Value, "the price per outcome unit");
+        double? value = price is null ? null : Between(price.Value, "the price per outcome unit", DesignLimits.MinScale, DesignLimits.MaxPrice);
         return new Valuation(direction, value, price?.Currency?.Value);
     }
 

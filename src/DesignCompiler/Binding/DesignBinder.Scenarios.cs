@@ -68,7 +68,7 @@ public sealed partial class DesignBinder
                     ok = false;
                     continue;
                 }
-                noise = Positive(entry.Value, "a scenario's noise sd");
+                noise = Scale(entry.Value, "a scenario's noise sd");
                 ok &= noise is not null;
                 continue;
             }
@@ -172,8 +172,8 @@ public sealed partial class DesignBinder
         var (ok, support) = outcome?.Family switch
         {
             OutcomeFamily.Bernoulli or OutcomeFamily.Binomial => (value is >= 0 and <= 1, "a probability between 0 and 1"),
-            OutcomeFamily.Count => (value >= 0 && double.IsFinite(value), "a mean count of 0 or more"),
-            _ => (double.IsFinite(value), "a finite number"),
+            OutcomeFamily.Count => (value is >= 0 and <= DesignLimits.MaxCount, $"a mean count from 0 to {DesignLimits.Text(DesignLimits.MaxCount)}"),
+            _ => (Math.Abs(value) <= DesignLimits.MaxMagnitude, $"a number between -{DesignLimits.Text(DesignLimits.MaxMagnitude)} and {DesignLimits.Text(DesignLimits.MaxMagnitude)}"),
         };
         if (ok) return value;
         Report(DiagnosticCatalog.ScenarioOutsideSupport, entry.Value.Span, entry.Value.Text, who, outcome?.FamilyText ?? "", support);

@@ -22,6 +22,7 @@ public static class LedgerDiagnostics
     public static readonly DiagnosticDescriptor HeaderMismatch = Error("TD4004", "{0}");
     public static readonly DiagnosticDescriptor CsvMalformed = Error("TD4005", "{0}");
     public static readonly DiagnosticDescriptor NoRows = Error("TD4007", "the sheet has its header but no plot rows; return the sheet with the outcomes filled in");
+    public static readonly DiagnosticDescriptor TooManyRows = Error("TD4009", "the sheet has more than {0} rows; the largest issued round has {1} plots, so this is not a results sheet of this trial (check the file, or remove the rows below the plots)");
     public static readonly DiagnosticDescriptor FieldCount = Error("TD4006", "this row has {0} fields; a sheet row has {1}: {2}");
 
     public static readonly DiagnosticDescriptor RoundNotWhole = Error("TD4010", "round '{0}' is not a round number");
@@ -44,7 +45,7 @@ public static class LedgerDiagnostics
     // --- TD41xx: the ledger ------------------------------------------------------
     public static readonly DiagnosticDescriptor LedgerUnreadable = Error("TD4101", "cannot open the ledger: {0}");
     public static readonly DiagnosticDescriptor NotALedger = Error("TD4102", "this is not a trial ledger: {0}");
-    public static readonly DiagnosticDescriptor LedgerLocked = Error("TD4103", "the ledger is busy: another trialc has held its write lock for over {0} s; try again when that command has finished");
+    public static readonly DiagnosticDescriptor LedgerLocked = Error("TD4103", "the ledger is busy: another trialc, or another program that has the file open, has held its lock for over {0} s; try again when that command has finished, or close the program");
     public static readonly DiagnosticDescriptor LedgerChanged = Error("TD4104", "the ledger was changed outside trialc: {0}");
     public static readonly DiagnosticDescriptor LedgerMissing = Error("TD4105", "there is no ledger here; 'trialc compile DESIGN --ledger {0} --out DIR' starts one with round 1");
     public static readonly DiagnosticDescriptor SchemaTooNew = Error("TD4106", "the ledger has schema version {0}; this trialc reads version {1}: use a newer trialc");

@@ -113,6 +113,15 @@ internal ref partial struct BestArmQuadrature
             expectedMaximum = arms[slotArm[0]].Mean;
             error = 2.0 * k * TailMass;
         }
+        else if (!(end > start))
+        {
+            // The survivors are points at one double (see ChooseSlots): a tie, shared equally.
+            int tied = 0;
+            for (int s = 0; s < slots; s++) tied += slotMultiplicity[s];
+            for (int s = 0; s < slots; s++) total[s] = 1.0 / tied;
+            expectedMaximum = end;
+            error = 2.0 * k * TailMass;
+        }
         else
         {
             expectedMaximum = Integrate(start, end, out error);
@@ -145,6 +154,21 @@ internal ref partial struct BestArmQuadrature
             slotOfGroup[g] = -1;
             if (hi[g] > start)
             {
+                endPower[slots] = hi[g];
+                order[slots] = g;
+                slots++;
+            }
+        }
+        if (slots == 0)
+        {
+            // Every support has collapsed onto at most one double (an sd below the spacing of doubles
+            // at the mean, say 1e-9 at 1e9), so no arm ends above where the highest begins. Each arm is a
+            // point to double precision; those ending highest are tied for best and are the survivors.
+            double top = double.NegativeInfinity;
+            for (int g = 0; g < groups; g++) top = Math.Max(top, hi[g]);
+            for (int g = 0; g < groups; g++)
+            {
+                if (hi[g] != top) continue;
                 endPower[slots] = hi[g];
                 order[slots] = g;
                 slots++;

@@ -13,7 +13,12 @@ namespace DesignCompiler.Results;
 /// </summary>
 public static class CsvReader
 {
-    public static (IReadOnlyList<CsvRecord> Records, IReadOnlyList<Diagnostic> Problems) Read(SourceText source)
+    /// <summary>
+    /// Splits the text; past <paramref name="maxRecords"/> records it stops with a problem at the first
+    /// record too many, so a file of millions of short lines costs no more than a sheet of the largest round.
+    /// </summary>
+    public static (IReadOnlyList<CsvRecord> Records, IReadOnlyList<Diagnostic> Problems) Read(
+        SourceText source, int maxRecords = int.MaxValue, Func<int, Diagnostic>? tooMany = null)
     {
         var text = source.Content;
         var records = new List<CsvRecord>();
@@ -21,6 +26,13 @@ public static class CsvReader
         var position = 0;
         while (position < text.Length)
         {
+            if (records.Count == maxRecords)
+            {
+                problems.Add(tooMany?.Invoke(position) ?? new Diagnostic(LedgerDiagnostics.CsvMalformed,
+                    SourceLocation.In(source, new TextSpan(position, 0)),
+                    [FormattableString.Invariant($"the file has more than {maxRecords} records")]));
+                break;
+            }
             var start = position;
             var fields = new List<CsvField>();
             while (true)

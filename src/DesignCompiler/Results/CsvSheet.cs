@@ -1,3 +1,4 @@
+using DesignCompiler.Binding;
 using System.Globalization;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Ledger;
@@ -15,7 +16,9 @@ public static class CsvSheet
 {
     public static (SheetTable? Table, IReadOnlyList<Diagnostic> Problems) Read(SourceText text)
     {
-        var (records, problems) = CsvReader.Read(text);
+        // Bounded before anything is known of the trial: a round's plots at the design maximum, a header,
+        // comments and the blank rows spreadsheets add; the checker then holds the file to the trial's own rounds.
+        var (records, problems) = CsvReader.Read(text, DesignLimits.MaxPlotsPerRound + 1 + ResultSheetChecker.BlankRowAllowance + 100);
         if (problems.Count > 0) return (null, problems);
 
         var start = SourceLocation.In(text, new TextSpan(0, 0));

@@ -20,8 +20,12 @@ public sealed record ResultFileText(string Path, byte[] Bytes, SheetTable Table)
 /// </summary>
 public static class ResultFile
 {
-    /// <summary>Far above any real sheet (a 10 000-plot round is under 1 MB); anything larger is the wrong file.</summary>
-    public const long MaxBytes = 64L * 1024 * 1024;
+    /// <summary>
+    /// A sheet of a round at the design maximum of 100 000 plots, with 40-character labels and a note on
+    /// every plot, is about 12 MB; a 10 000-plot round is under 1 MB. Twice the first leaves room for long
+    /// labels and notes, and keeps the time and memory to read any accepted file to seconds and well under a gigabyte.
+    /// </summary>
+    public const long MaxBytes = 32L * 1024 * 1024;
 
     public static (ResultFileText? File, IReadOnlyList<Diagnostic> Problems) Read(string path)
     {
@@ -32,7 +36,7 @@ public static class ResultFile
             var info = new FileInfo(path);
             if (!info.Exists) return Failed(Unreadable(path, "no such file"));
             if (info.Length > MaxBytes)
-                return Failed(Unreadable(path, FormattableString.Invariant($"it is {info.Length:N0} bytes; a results sheet is far smaller")));
+                return Failed(Unreadable(path, SourceFiles.TooLarge(info.Length, MaxBytes, "a results sheet")));
             bytes = File.ReadAllBytes(path);
         }
         catch (UnauthorizedAccessException)

@@ -17,9 +17,22 @@ namespace DesignCompiler.Results;
 /// </summary>
 public static partial class ResultSheetChecker
 {
+    /// <summary>
+    /// Spreadsheets add empty rows below the data (tested: they are skipped); this many are allowed
+    /// beyond a header and one row per plot before the file is taken for something else.
+    /// </summary>
+    public const int BlankRowAllowance = 10_000;
+
     public static (CheckedSheet? Sheet, IReadOnlyList<Diagnostic> Diagnostics) Check(
         SheetTable table, IReadOnlyList<IssuedSheet> issued, OutcomeSpec outcome, IOutcomeModel model)
     {
+        // A file with far more rows than the largest issued round is not a results sheet of this trial.
+        var largest = issued.Count == 0 ? 0 : issued.Max(s => s.Plots.Count);
+        var limit = largest + 1 + BlankRowAllowance;
+        var allRows = table.Sections.SelectMany(s => s.Rows).ToList();
+        if (allRows.Count > limit - 1)
+            return (null, [new Diagnostic(LedgerDiagnostics.TooManyRows, allRows[limit - 1].Start, [limit, largest])]);
+
         var bag = new DiagnosticBag();
         var headersRight = true;
         foreach (var section in table.Sections) headersRight &= HeaderIsRight(section, bag);

@@ -75,7 +75,7 @@ public sealed class LedgerReliabilityTests
         holder.Kill();
 
         Assert.Equal(1, blocked.ExitCode);
-        Assert.Contains($"{trial.Ledger}: error TD4103: the ledger is busy: another trialc has held its write lock for over 5 s", blocked.Error);
+        Assert.Contains($"{trial.Ledger}: error TD4103: the ledger is busy: another trialc, or another program that has the file open, has held its lock for over 5 s", blocked.Error);
         Assert.DoesNotContain("Exception", blocked.Error);
         Assert.True(waited.Elapsed >= TimeSpan.FromSeconds(4), "it should have waited for the lock");
         Assert.Equal(before, LedgerDump.Of(trial.Ledger));

@@ -13,12 +13,23 @@ namespace DesignCompiler.Tests.Ledger;
 public sealed class LedgerTrial : IDisposable
 {
     public LedgerTrial(string example)
+        : this(example, System.IO.File.ReadAllBytes(RepoPaths.Example(example)))
+    {
+    }
+
+    /// <summary>A trial of a design written by the test, saved as <paramref name="fileName"/>.</summary>
+    public LedgerTrial(string fileName, string designText)
+        : this(fileName, new UTF8Encoding(false).GetBytes(designText))
+    {
+    }
+
+    private LedgerTrial(string fileName, byte[] design)
     {
         Folder = Path.Combine(Path.GetTempPath(), "trialc-ledger-" + Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(Folder);
-        Stem = Path.GetFileNameWithoutExtension(example);
-        Design = Path.Combine(Folder, example);
-        System.IO.File.Copy(RepoPaths.Example(example), Design);
+        Stem = Path.GetFileNameWithoutExtension(fileName);
+        Design = Path.Combine(Folder, fileName);
+        System.IO.File.WriteAllBytes(Design, design);
         Ledger = Path.Combine(Folder, Stem + ".ledger");
     }
 

@@ -19,5 +19,5 @@ public sealed class GammaPoissonModel : IOutcomeModel
     }
 
     public (bool Ok, string Rule) Accepts(double value) =>
-        (value >= 0 && Math.Floor(value) == value && double.IsFinite(value), "a whole count of 0 or more");
+        (value is >= 0 and <= DesignLimits.MaxCount && Math.Floor(value) == value, $"a whole count from 0 to {DesignLimits.Text(DesignLimits.MaxCount)}");
 }

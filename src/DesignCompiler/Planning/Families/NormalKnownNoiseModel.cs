@@ -23,5 +23,5 @@ public sealed class NormalKnownNoiseModel(double noiseSd) : IOutcomeModel
         return new NormalMarginal(mean, Math.Sqrt(variance));
     }
 
-    public (bool Ok, string Rule) Accepts(double value) => (double.IsFinite(value), "a finite number");
+    public (bool Ok, string Rule) Accepts(double value) => NormalValues.Accepts(value);
 }

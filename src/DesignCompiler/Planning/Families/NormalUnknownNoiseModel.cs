@@ -34,5 +34,5 @@ public sealed class NormalUnknownNoiseModel : IOutcomeModel
         return (kappa, mu, alpha, beta);
     }
 
-    public (bool Ok, string Rule) Accepts(double value) => (double.IsFinite(value), "a finite number");
+    public (bool Ok, string Rule) Accepts(double value) => NormalValues.Accepts(value);
 }

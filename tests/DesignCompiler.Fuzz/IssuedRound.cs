@@ -1,0 +1,49 @@
+using System.Reflection;
+using DesignCompiler.Binding;
+using DesignCompiler.Planning;
+using DesignCompiler.Planning.Families;
+using DesignCompiler.Rendering;
+using DesignCompiler.Results;
+using DesignCompiler.Text;
+
+namespace DesignCompiler.Fuzz;
+
+/// <summary>
+/// Round 1 of the cover-crop example, planned once: what a returned sheet is checked against,
+/// exactly as <c>trialc record</c> would check it after <c>compile --ledger</c> issued the round.
+/// </summary>
+internal sealed class IssuedRound
+{
+    private IssuedRound(CheckedDesign design, RoundPlan plan, byte[] sheet)
+    {
+        Design = design;
+        Model = OutcomeModels.For(design.Outcome);
+        Sheets = [new IssuedSheet(plan.Round,
+            plan.Assignments.Select((p, k) => new IssuedPlot(k, p.Block, p.PlotId, p.Row, p.Column, p.ArmCode)).ToList(), null)];
+        Plan = plan;
+        BlankSheet = sheet;
+    }
+
+    public static IssuedRound CoverCrops { get; } = Make("cover-crops.trial");
+
+    public CheckedDesign Design { get; }
+    public IOutcomeModel Model { get; }
+    public IReadOnlyList<IssuedSheet> Sheets { get; }
+    public RoundPlan Plan { get; }
+
+    /// <summary>The crew sheet as compile writes it, outcomes still blank.</summary>
+    public byte[] BlankSheet { get; }
+
+    private static IssuedRound Make(string resource)
+    {
+        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
+            ?? throw new InvalidOperationException("the harness was built without the embedded " + resource);
+        using var reader = new StreamReader(stream);
+        var bound = DesignBinder.Check(new SourceText(resource, reader.ReadToEnd()));
+        var design = bound.Design ?? throw new InvalidOperationException(resource + " does not check clean");
+        var plan = RoundPlanner.For(design).Planner!.Plan(new TrialState(design.Arms.Count), 1).Plan
+            ?? throw new InvalidOperationException(resource + " plans no round 1");
+        var (files, _) = RoundOutputs.Render(plan, design, Path.GetFileNameWithoutExtension(resource));
+        return new IssuedRound(design, plan, files.Single(f => f.Name.EndsWith(".csv", StringComparison.Ordinal)).Content);
+    }
+}
