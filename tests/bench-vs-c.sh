@@ -5,7 +5,7 @@
 #     Beta(1,1) priors, p = 0.50 and 0.45 x 9, on one and two threads;
 #   - P(best) of the reference's ten beta arms (planner settings, and the reference's 1e-12 settings);
 #   - plain Python on 20 trials of (a), per trial;
-#   - trialc check of a 1,000-arm design, less the start-up of checking a one-arm design.
+#   - trialc check of a 1,000-arm design, less the start-up of checking a two-arm design.
 # Timings on a shared machine are noisy: every measurement is repeated ROUNDS times (default 3), C and C#
 # interleaved, and the median and the range are printed.
 #   tests/bench-vs-c.sh                      # REFERENCE_DIR defaults to ../shared/reference beside the repo
@@ -27,7 +27,7 @@ trialc="$root/src/DesignCompiler.Cli/bin/Release/net10.0/trialc"
 bench="$root/tests/DesignCompiler.Benchmarks/bin/Release/net10.0/DesignCompiler.Benchmarks"
 design="$root/tests/DesignCompiler.Benchmarks/Designs/reference-pm-a.trial"
 
-# A 1,000-arm design and a one-arm one (start-up only), invented for the check timing.
+# A 1,000-arm design and a two-arm one (start-up only), invented for the check timing.
 {
   echo 'trial "Thousand line screen" {'; echo '  seed 5'; echo '  rounds 3'; echo '  outcome emerged: bernoulli'
   echo '  policy thompson'
@@ -36,7 +36,7 @@ design="$root/tests/DesignCompiler.Benchmarks/Designs/reference-pm-a.trial"
   echo '  limit every arm >= 1 plots per round'; echo '  limit every arm <= 2% per round'
   echo '  scenario "one better" { every arm 0.5 L0500 0.6 }'; echo '}'
 } > "$work/thousand.trial"
-printf 'trial "One line" {\n  seed 5\n  rounds 1\n  outcome emerged: bernoulli\n  arm L0 "Line 0"\n  plots 10 per round\n}\n' > "$work/one.trial"
+printf 'trial "Two lines" {\n  seed 5\n  rounds 1\n  outcome emerged: bernoulli\n  arm L0 "Line 0" prior beta(1, 1)\n  arm L1 "Line 1" prior beta(1, 1)\n  plots 10 per round\n}\n' > "$work/one.trial"
 
 now() { date +%s.%N; }
 json() { python3 -c "import json,sys; print(json.load(open(sys.argv[1]))[sys.argv[2]])" "$1" "$2"; }

@@ -57,6 +57,15 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProf
         belowUpperBound = size * (Scale > 0 ? innerBelow : innerAbove);
     }
 
+    bool IQuadratureProfile.WideSupport(double tailMass, out double lo, out double hi)
+    {
+        bool known = MarginalProfile.WideSupport(Inner, tailMass, out double innerLo, out double innerHi);
+        // One rounding of Map either way is covered by the bounds' own margin, which is far wider.
+        lo = Scale > 0 ? Map(innerLo) : Map(innerHi);
+        hi = Scale > 0 ? Map(innerHi) : Map(innerLo);
+        return known;
+    }
+
     double IQuadratureProfile.PanelWidth(double u, bool forward) =>
         Math.Abs(Scale) * MarginalProfile.PanelWidth(Inner, Unmap(u), forward == Scale > 0);
 

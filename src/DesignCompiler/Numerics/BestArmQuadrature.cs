@@ -141,9 +141,23 @@ internal ref partial struct BestArmQuadrature
     /// </summary>
     private double ChooseSlots(int groups, out double end)
     {
+        // A cheap screen first: bounds that surely contain each support (closed forms, no quantile search)
+        // already show which groups end below where another surely begins. Those cannot be best and would be
+        // dropped below anyway; they are spared the exact search, the costly part for many peaked arms.
+        double surelyBegins = double.NegativeInfinity;
+        for (int g = 0; g < groups; g++)
+        {
+            if (!MarginalProfile.WideSupport(arms[representative[g]], TailMass, out lo[g], out hi[g])) (lo[g], hi[g]) = (double.NegativeInfinity, double.PositiveInfinity);
+            surelyBegins = Math.Max(surelyBegins, lo[g]);
+        }
         double start = double.NegativeInfinity;
         for (int g = 0; g < groups; g++)
         {
+            if (hi[g] < surelyBegins)
+            {
+                lo[g] = hi[g] = double.NegativeInfinity;
+                continue;
+            }
             MarginalProfile.Support(arms[representative[g]], TailMass, out lo[g], out hi[g], out above[g], out below[g]);
             start = Math.Max(start, lo[g]);
         }

@@ -91,6 +91,18 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
         belowUpperBound = Math.Max(belowUpperBound, 1e-300);
     }
 
+    // Beta(a, b) is sub-Gaussian with variance proxy at most 1/(4(a + b + 1)) (O. Marchal and J. Arbel, "On the
+    // sub-Gaussianity of the Beta and Dirichlet distributions", Electron. Commun. Probab. 22, 2017; from memory),
+    // so each tail beyond mean ± t holds at most exp(−2(a + b + 1)t²). Asked for 1e-4 of the tail mass, the bounds
+    // are wider than the support's search could ever return.
+    bool IQuadratureProfile.WideSupport(double tailMass, out double lo, out double hi)
+    {
+        double t = Math.Sqrt(-Math.Log(1e-4 * tailMass) / (2.0 * (A + B + 1.0)));
+        lo = Math.Max(0.0, Mean - t);
+        hi = Math.Min(1.0, Mean + t);
+        return true;
+    }
+
     double IQuadratureProfile.PanelWidth(double x, bool forward) => PanelWidthAt(x, 1.0 - x, forward);
 
     void IQuadratureProfile.Evaluate(double x, out double density, out double cdf, out double upperTail) =>

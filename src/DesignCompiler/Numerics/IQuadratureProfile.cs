@@ -18,6 +18,17 @@ internal interface IQuadratureProfile
     void Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound);
 
     /// <summary>
+    /// Cheap bounds, from a closed form, that surely contain what <see cref="Support"/> returns (with room for
+    /// its few per cent); false when there are none. The quadrature's screen uses them.
+    /// </summary>
+    bool WideSupport(double tailMass, out double lo, out double hi)
+    {
+        lo = double.NegativeInfinity;
+        hi = double.PositiveInfinity;
+        return false;
+    }
+
+    /// <summary>
     /// The widest panel on which a 20-point Gauss–Legendre rule resolves this density: [x, x + w] when
     /// <paramref name="forward"/>, otherwise [x − w, x].
     /// </summary>

@@ -24,6 +24,15 @@ internal static class MarginalProfile
         belowUpperBound = m.UpperBound - hi;
     }
 
+    /// <summary>Bounds that surely contain the support <see cref="Support"/> finds, when a closed form gives them.</summary>
+    internal static bool WideSupport(IMarginal m, double tailMass, out double lo, out double hi)
+    {
+        if (m is IQuadratureProfile p) return p.WideSupport(tailMass, out lo, out hi);
+        lo = double.NegativeInfinity;
+        hi = double.PositiveInfinity;
+        return false;
+    }
+
     internal static double PanelWidth(IMarginal m, double x, bool forward)
     {
         if (m is IQuadratureProfile p) return p.PanelWidth(x, forward);
