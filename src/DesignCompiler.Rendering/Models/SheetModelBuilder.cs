@@ -90,5 +90,14 @@ public static class SheetModelBuilder
     public static string AccuracyText(double bound) =>
         !double.IsFinite(bound) ? "P(best) figures carry no error bound"
         : bound <= 1e-9 ? "P(best) figures are exact to the digits shown"
-        : "P(best) figures are computed to within ±" + NumberText.Significant(bound) + " (estimated numerical error)";
+        : "P(best) figures are computed to within ±" + RoundedUp(bound) + " (estimated numerical error)";
+
+    /// <summary>The bound rounded up to one significant digit, in plain decimals: 5.121e-5 reads "0.00006".</summary>
+    private static string RoundedUp(double bound)
+    {
+        var exponent = (int)Math.Floor(Math.Log10(bound));
+        var step = Math.Pow(10, exponent);
+        var value = Math.Ceiling(bound / step * (1 - 1e-12)) * step;
+        return NumberText.Fixed(value, Math.Max(0, -exponent));
+    }
 }

@@ -27,7 +27,17 @@ public static class ComparisonModelBuilder
     {
         var equal = s.A.Scenario.AllArmsEqual && s.B.Scenario.AllArmsEqual;
         var unit = report.A.ValueUnit ?? "";
-        var figures = s.Figures.Select(f =>
+        var figures = Figures(s, equal, unit);
+        var verdicts = figures.Where(f => f.Clear).Select(f => f.Verdict).ToList();
+        return new ComparedScenarioModel(s.Name,
+            SimulationModelBuilder.WorldText(report.A, s.A.Scenario), SimulationModelBuilder.WorldText(report.B, s.B.Scenario),
+            equal, FigureText.Whole(s.A.Replications), figures, verdicts, Charts(report, s, id),
+            SimulationModelBuilder.Scenario(report.A, s.A, id + "a"), SimulationModelBuilder.Scenario(report.B, s.B, id + "b"));
+    }
+
+    /// <summary>Each compared figure for A, B and the paired difference, with the plain-words verdict where it is clear.</summary>
+    public static List<FigureModel> Figures(ComparedScenario s, bool equal, string unit, string nameA = "A", string nameB = "B") =>
+        s.Figures.Select(f =>
         {
             var d = f.Difference;
             return new FigureModel(ComparisonWords.Key(f.Figure), ComparisonWords.Label(f.Figure, equal),
@@ -37,14 +47,8 @@ public static class ComparisonModelBuilder
                 double.IsFinite(d.StandardError)
                     ? FigureText.AtPrecision(d.Lower95, d.StandardError) + " to " + FigureText.AtPrecision(d.Upper95, d.StandardError)
                     : "-",
-                f.IsClear, ComparisonWords.Verdict(f, equal, unit));
+                f.IsClear, ComparisonWords.Verdict(f, equal, unit, nameA, nameB));
         }).ToList();
-        var verdicts = figures.Where(f => f.Clear).Select(f => f.Verdict).ToList();
-        return new ComparedScenarioModel(s.Name,
-            SimulationModelBuilder.WorldText(report.A, s.A.Scenario), SimulationModelBuilder.WorldText(report.B, s.B.Scenario),
-            equal, FigureText.Whole(s.A.Replications), figures, verdicts, Charts(report, s, id),
-            SimulationModelBuilder.Scenario(report.A, s.A, id + "a"), SimulationModelBuilder.Scenario(report.B, s.B, id + "b"));
-    }
 
     /// <summary>Both designs on the same axes: A as a solid line with circles, B dashed with squares.</summary>
     private static IReadOnlyList<ChartModel> Charts(ComparisonReport report, ComparedScenario s, string id)

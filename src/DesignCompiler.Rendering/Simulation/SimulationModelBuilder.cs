@@ -28,18 +28,7 @@ public static class SimulationModelBuilder
     {
         var equal = s.A.Scenario.AllArmsEqual;
         var unit = setup.ValueUnit ?? "";
-        var figures = s.Figures.Select(f =>
-        {
-            var d = f.Difference;
-            return new FigureModel(ComparisonWords.Key(f.Figure), ComparisonWords.Label(f.Figure, equal),
-                FigureText.Model(f.A), FigureText.Model(f.B), FigureText.Model(d),
-                NumberText.Exact(d.Lower95), NumberText.Exact(d.Upper95),
-                FigureText.Signed(d.Mean, d.StandardError),
-                double.IsFinite(d.StandardError)
-                    ? FigureText.AtPrecision(d.Lower95, d.StandardError) + " to " + FigureText.AtPrecision(d.Upper95, d.StandardError)
-                    : "-",
-                f.IsClear, ComparisonWords.Verdict(f, equal, unit, "this design", "Equal allocation"));
-        }).ToList();
+        var figures = ComparisonModelBuilder.Figures(s, equal, unit, "this design", "Equal allocation");
         var bias = setup.Arms.Select((arm, a) => new TwinBiasModel(arm.Code, FigureText.Model(s.A.Arms[a].Bias), FigureText.Model(s.B.Arms[a].Bias))).ToList();
         var rounds = setup.Rounds;
         var valueUnit = string.IsNullOrEmpty(setup.ValueUnit) ? "value units" : setup.ValueUnit;
