@@ -6,30 +6,30 @@ namespace DesignCompiler.Fuzz;
 
 /// <summary>
 /// Reading and checking a results file's bytes against the fixed issued round, shared by every
-/// results format's target: a new format decodes its bytes to sheet text and calls <see cref="Check"/>.
+/// results format's target: the bytes are decoded to one table shape (CSV or workbook) and checked the same way.
 /// </summary>
 internal static class ResultsCheck
 {
     public static void Run(byte[] input, string path)
     {
-        var (file, problem) = ResultFile.Decode(path, input);
+        var (file, problems) = ResultFile.Decode(path, input);
         if (file is null)
         {
-            // A decoding problem points into the part of the file that did decode, its own text.
-            var decoded = problem!.Location.Source ?? new Text.SourceText(path, "");
-            Findings.ThrowIfAny(OutputInvariants.DiagnosticProblems(decoded, [problem]));
-            _ = DiagnosticFormatter.Format(problem!);
+            if (problems.Count == 0) throw new FuzzFinding("a file was refused without a problem");
+            ThrowIfMisplaced(problems, path);
+            _ = DiagnosticFormatter.FormatAll(problems);
             return;
         }
-        Check(file.Text);
+        Check(file.Table, path);
     }
 
-    public static void Check(Text.SourceText text)
+    /// <summary>Checks a decoded sheet (CSV or workbook, one table shape) against the fixed issued round.</summary>
+    public static void Check(SheetTable table, string path)
     {
         var round = IssuedRound.CoverCrops;
-        var (sheet, diagnostics) = ResultSheetChecker.Check(text, round.Sheets, round.Design.Outcome, round.Model);
+        var (sheet, diagnostics) = ResultSheetChecker.Check(table, round.Sheets, round.Design.Outcome, round.Model);
         _ = DiagnosticFormatter.FormatAll(diagnostics);
-        Findings.ThrowIfAny(OutputInvariants.DiagnosticProblems(text, diagnostics));
+        ThrowIfMisplaced(diagnostics, path);
         if (sheet is null)
         {
             if (!diagnostics.Any(d => d.Severity == Severity.Error)) throw new FuzzFinding("a sheet was refused without an error");
@@ -40,5 +40,12 @@ internal static class ResultsCheck
         foreach (var result in sheet.Results)
             if (result.Value is { } value && !round.Model.Accepts(value).Ok)
                 throw new FuzzFinding($"plot {result.PlotId} was accepted with the value {value:R}, which the family refuses");
+    }
+
+    /// <summary>Every diagnostic must point inside the text it came from (a workbook cell carries no text and is skipped).</summary>
+    private static void ThrowIfMisplaced(IEnumerable<Diagnostic> diagnostics, string path)
+    {
+        foreach (var d in diagnostics)
+            Findings.ThrowIfAny(OutputInvariants.DiagnosticProblems(d.Location.Source ?? new Text.SourceText(path, ""), [d]));
     }
 }
