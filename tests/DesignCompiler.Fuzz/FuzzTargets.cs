@@ -7,6 +7,7 @@ internal static class FuzzTargets
     [
         new DesignTarget(),
         new CsvResultsTarget(),
+        new XlsxResultsTarget(),
     ];
 
     public static IFuzzTarget? Find(string name) =>

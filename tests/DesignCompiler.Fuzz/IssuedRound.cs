@@ -14,7 +14,7 @@ namespace DesignCompiler.Fuzz;
 /// </summary>
 internal sealed class IssuedRound
 {
-    private IssuedRound(CheckedDesign design, RoundPlan plan, byte[] sheet)
+    private IssuedRound(CheckedDesign design, RoundPlan plan, byte[] sheet, byte[] workbook)
     {
         Design = design;
         Model = OutcomeModels.For(design.Outcome);
@@ -22,6 +22,7 @@ internal sealed class IssuedRound
             plan.Assignments.Select((p, k) => new IssuedPlot(k, p.Block, p.PlotId, p.Row, p.Column, p.ArmCode)).ToList(), null)];
         Plan = plan;
         BlankSheet = sheet;
+        BlankWorkbook = workbook;
     }
 
     public static IssuedRound CoverCrops { get; } = Make("cover-crops.trial");
@@ -34,6 +35,9 @@ internal sealed class IssuedRound
     /// <summary>The crew sheet as compile writes it, outcomes still blank.</summary>
     public byte[] BlankSheet { get; }
 
+    /// <summary>The crew workbook (.xlsx) as compile writes it, outcomes still blank.</summary>
+    public byte[] BlankWorkbook { get; }
+
     private static IssuedRound Make(string resource)
     {
         using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
@@ -44,6 +48,7 @@ internal sealed class IssuedRound
         var plan = RoundPlanner.For(design).Planner!.Plan(new TrialState(design.Arms.Count), 1).Plan
             ?? throw new InvalidOperationException(resource + " plans no round 1");
         var (files, _) = RoundOutputs.Render(plan, design, Path.GetFileNameWithoutExtension(resource));
-        return new IssuedRound(design, plan, files.Single(f => f.Name.EndsWith(".csv", StringComparison.Ordinal)).Content);
+        return new IssuedRound(design, plan, files.Single(f => f.Name.EndsWith(".csv", StringComparison.Ordinal)).Content,
+            files.Single(f => f.Name.EndsWith(".xlsx", StringComparison.Ordinal)).Content);
     }
 }
