@@ -55,7 +55,7 @@ public static class CorrelatedBestArm
         var comparisons = new ArmComparisons(location, scale, degreesOfFreedom);
         bool withMoments = degreesOfFreedom > 1;
         int[] active = comparisons.Active;
-        var runs = new LatticeRun[active.Length];
+        var problems = new SeparatedProblem[active.Length];
         for (int a = 0; a < active.Length; a++)
         {
             int arm = active[a];
@@ -64,8 +64,10 @@ public static class CorrelatedBestArm
             {
                 if (j != arm && !comparisons.SurelyBeats[arm, j]) rivals.Add(j);
             }
-            runs[a] = new LatticeRun(BestArmOrthant.Build(location, scale, arm, rivals, withMoments), degreesOfFreedom, settings);
+            problems[a] = BestArmOrthant.Build(location, scale, arm, rivals, withMoments);
         }
+        var chi = problems.Any(p => LatticeRun.NeedsChi(p, degreesOfFreedom)) ? new ChiScale(degreesOfFreedom) : null;
+        var runs = problems.Select(p => new LatticeRun(p, degreesOfFreedom, chi, settings)).ToArray();
 
         long n = settings.FirstPointsPerShift;
         foreach (var run in runs) run.ExtendTo(n);
