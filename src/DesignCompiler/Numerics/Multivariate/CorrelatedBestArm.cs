@@ -18,16 +18,17 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// separated variables is linear in them, and its last term is integrated exactly (the truncated normal's mean),
 /// so E[max] costs no extra points. It exists only for ν &gt; 1; below that E[max] and every loss are +∞. For
 /// ν ≤ 2 the E[max] integrand has infinite variance, so its error is reported as +∞.</para>
-/// <para>The probabilities are normalised to sum to 1 (each raw estimate already lies in [0, 1]: the integrand
-/// does). The error of the normalised q_i = P̄_i / S, S = Σ_j P̄_j, is estimated from the shifts directly, as
-/// three standard errors of the ratio: 3 · sd_q(P_iq − q_i S_q) / (√Q S), with P_iq and S_q the estimates from
-/// shift q alone (every arm uses the same shifts, so their correlation is kept). ErrorBound is the largest of these
-/// plus the screened arms' mass and a rounding floor of 1e-14 (so two arms, which are exact, report 1e-14). Every arm starts with the first pass of points; then, while ErrorBound is above
-/// the accuracy, every arm doubles its points together (within the budget), except arms whose own raw error is
-/// already below accuracy / (4 k), which together cannot move any probability by more than a quarter of it.
-/// Going together matters: arms that share the shifts and the number of points have errors that rise and fall
-/// together, and normalising cancels most of them (by a factor of about 4 in the cases measured). Normalising cancels much of the error the arms share, so this stops well before every
-/// raw error would be within the accuracy.</para>
+/// <para>The probabilities are clamped into [0, 1] (for the normal, and for the t with the tabulated chi inverse,
+/// every point's value already lies there) and normalised to sum to 1. The error of the normalised
+/// q_i = P̄_i / S, S = Σ_j P̄_j, is estimated from the shifts directly, as three standard errors of the ratio:
+/// 3 · sd_q(P_iq − q_i S_q) / (√Q S), with P_iq and S_q the estimates from shift q alone (every arm uses the same
+/// shifts, so their correlation is kept). ErrorBound is the largest of these plus the screened arms' mass and a
+/// rounding floor of 1e-14 (so two arms, which are exact, report 1e-14).</para>
+/// <para>Every arm starts with the first pass of points; then, while ErrorBound is above the accuracy, every arm
+/// doubles its points together (within the budget), except arms whose own raw error is already below
+/// accuracy / (4 k), which together cannot move any probability by more than a quarter of it. Going together
+/// matters: arms that share the shifts and the number of points have errors that rise and fall together, and
+/// normalising cancels most of them (by a factor of about 4 in the cases measured).</para>
 /// </remarks>
 public static class CorrelatedBestArm
 {
@@ -55,7 +56,7 @@ public static class CorrelatedBestArm
         var comparisons = new ArmComparisons(location, scale, degreesOfFreedom);
         bool withMoments = degreesOfFreedom > 1;
         int[] active = comparisons.Active;
-        var runs = new LatticeRun[active.Length];
+        var problems = new SeparatedProblem[active.Length];
         for (int a = 0; a < active.Length; a++)
         {
             int arm = active[a];
@@ -64,8 +65,10 @@ public static class CorrelatedBestArm
             {
                 if (j != arm && !comparisons.SurelyBeats[arm, j]) rivals.Add(j);
             }
-            runs[a] = new LatticeRun(BestArmOrthant.Build(location, scale, arm, rivals, withMoments), degreesOfFreedom, settings);
+            problems[a] = BestArmOrthant.Build(location, scale, arm, rivals, withMoments);
         }
+        var chi = problems.Any(p => LatticeRun.NeedsChi(p, degreesOfFreedom)) ? new ChiScale(degreesOfFreedom) : null;
+        var runs = problems.Select(p => new LatticeRun(p, degreesOfFreedom, chi, settings)).ToArray();
 
         long n = settings.FirstPointsPerShift;
         foreach (var run in runs) run.ExtendTo(n);

@@ -18,18 +18,19 @@ internal sealed class LatticeRun
     internal const double RoundingFloor = 1e-14;
 
     private readonly SeparatedProblem problem;
-    private readonly ChiScale chi;
-    private readonly bool isT;
+    private readonly ChiScale? chi;
     private readonly RichtmyerPoints? points;
     private readonly double[] probabilitySums;
     private readonly double[] momentSums;
     private readonly double[] point;
     private readonly double[] y;
 
-    public LatticeRun(SeparatedProblem problem, double degreesOfFreedom, LatticeSettings settings)
+    /// <param name="chi">the chi variable for a t (ν finite), built once for all runs of a computation
+    /// (<see cref="NeedsChi"/>); null for the normal.</param>
+    public LatticeRun(SeparatedProblem problem, double degreesOfFreedom, ChiScale? chi, LatticeSettings settings)
     {
         this.problem = problem;
-        isT = !double.IsPositiveInfinity(degreesOfFreedom);
+        bool isT = !double.IsPositiveInfinity(degreesOfFreedom);
         int q = settings.Shifts;
         probabilitySums = new double[q];
         momentSums = new double[q];
@@ -47,11 +48,15 @@ internal sealed class LatticeRun
             point = [];
             return;
         }
-        if (isT) chi = new ChiScale(degreesOfFreedom);
+        if (isT) this.chi = chi ?? throw new ArgumentNullException(nameof(chi), "A t problem needs its chi variable.");
         int dimension = problem.Rank - 1 + (isT ? 1 : 0);
         points = new RichtmyerPoints(dimension, q, settings.Seed);
         point = new double[dimension];
     }
+
+    /// <summary>Whether a problem with these degrees of freedom will integrate over the chi variable.</summary>
+    public static bool NeedsChi(SeparatedProblem problem, double degreesOfFreedom) =>
+        !double.IsPositiveInfinity(degreesOfFreedom) && !problem.Infeasible && problem.Rank >= 2;
 
     /// <summary>True when the answer is exact and more points would change nothing.</summary>
     public bool IsExact => points is null;
@@ -88,7 +93,7 @@ internal sealed class LatticeRun
                 points.Fill(q, n, w);
                 double scale = 1.0, weight = 1.0;
                 ReadOnlySpan<double> rest = w;
-                if (isT)
+                if (chi is not null)
                 {
                     chi.Map(w[0], out scale, out weight);
                     rest = w[1..];

@@ -40,7 +40,8 @@ public static class RectangleProbability
             b[j] = upper[j] - location[j];
         }
         var problem = PrioritisedCholesky.Factor(scale, a, b, []);
-        var run = new LatticeRun(problem, degreesOfFreedom, settings);
+        var chi = LatticeRun.NeedsChi(problem, degreesOfFreedom) ? new ChiScale(degreesOfFreedom) : null;
+        var run = new LatticeRun(problem, degreesOfFreedom, chi, settings);
         Refine(run, settings);
         double error = run.ProbabilityError;
         return new LatticeEstimate(Math.Clamp(run.Probability, 0.0, 1.0), error, run.PointsPerShift, error <= settings.Accuracy);

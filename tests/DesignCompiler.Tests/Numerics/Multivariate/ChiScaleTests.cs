@@ -1,21 +1,23 @@
+using DesignCompiler.Numerics;
 using DesignCompiler.Numerics.Multivariate;
 
 namespace DesignCompiler.Tests.Numerics.Multivariate;
 
 public class ChiScaleTests
 {
-    // The weighted map w → (s, weight) must reproduce the law of s = √(χ²_ν/ν): ∫₀¹ weight dw = 1,
+    // Whichever map a ν gets, w → (s, weight) must reproduce the law of s = √(χ²_ν/ν): ∫₀¹ weight dw = 1,
     // E[s²] = 1 and, for ν > 2, E[1/s²] = ν/(ν − 2) (moments of χ²_ν and of its inverse; common textbook results).
     // Integrated by the midpoint rule on 2·10⁵ cells after w = 3x² − 2x³ (dw = 6x(1 − x) dx), which smooths the
-    // w^½ the weight can have at the ends (it is w^((√ν − 2)/2) there for ν ≥ 4).
+    // power laws both maps have at the ends.
     [Theory]
-    [InlineData(0.5)]
+    [InlineData(0.3)]
     [InlineData(1.0)]
     [InlineData(3.0)]
     [InlineData(4.0)]
     [InlineData(9.0)]
     [InlineData(120.0)]
     [InlineData(1e6)]
+    [InlineData(1e8)]
     public void WeightedScaleHasTheChiLaw(double nu)
     {
         var chi = new ChiScale(nu);
@@ -30,8 +32,33 @@ public class ChiScaleTests
             second += weight * s * s;
             inverseSecond += weight / (s * s);
         }
-        NumericAssert.Absolute(1.0, mass / cells, 1e-9, "total weight");
-        NumericAssert.Absolute(1.0, second / cells, 1e-8, "E[s²]");
-        if (nu > 3) NumericAssert.Relative(nu / (nu - 2), inverseSecond / cells, 1e-7, "E[1/s²]");
+        NumericAssert.Absolute(1.0, mass / cells, 1e-8, "total weight");
+        NumericAssert.Absolute(1.0, second / cells, 1e-7, "E[s²]");
+        if (nu > 3) NumericAssert.Relative(nu / (nu - 2), inverseSecond / cells, 1e-6, "E[1/s²]");
+    }
+
+    // Between ν = 0.5 and 1e7 s is the tabulated inverse chi CDF: against the project's incomplete-gamma inverse
+    // (tested against mpmath in IncompleteGammaTests), s = √(2 P⁻¹(ν/2, w)/ν) to 1e-9 relative, from w = 1e-15 to
+    // 1 − 1e-9 (beyond that 1 − w itself carries too few digits for the comparison).
+    [Theory]
+    [InlineData(0.5)]
+    [InlineData(1.0)]
+    [InlineData(2.5)]
+    [InlineData(12.0)]
+    [InlineData(1e4)]
+    [InlineData(1e7)]
+    public void TabulatedScaleIsTheInverseChiCdf(double nu)
+    {
+        var chi = new ChiScale(nu);
+        Assert.True(chi.IsInverse);
+        for (int i = 0; i <= 400; i++)
+        {
+            double t = -34.5 + (34.5 + 20.7) * i / 400;
+            double w = 1 / (1 + Math.Exp(-t));
+            chi.Map(w, out double s, out double weight);
+            double exact = Math.Sqrt(2 * IncompleteGamma.Inverse(nu / 2, w) / nu);
+            Assert.Equal(1.0, weight);
+            NumericAssert.Relative(exact, s, 1e-9, $"s at w = {w}");
+        }
     }
 }
