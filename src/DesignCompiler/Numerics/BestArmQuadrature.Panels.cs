@@ -3,7 +3,11 @@ namespace DesignCompiler.Numerics;
 /// <summary>One panel: the shared Gauss–Legendre nodes, the derivative check and its bisection.</summary>
 internal ref partial struct BestArmQuadrature
 {
-    private void IntegratePanel(double t0, double g0, double t1, double g1, int depth, double parentDefect = double.PositiveInfinity)
+    /// <summary>
+    /// Integrates one panel, bisecting it while its derivative check fails, and returns G at its right end,
+    /// which is evaluated with the nodes; <paramref name="keepEnd"/> keeps the values there for the next panel.
+    /// </summary>
+    private double IntegratePanel(double t0, double g0, double t1, int depth, bool keepEnd, double parentDefect = double.PositiveInfinity)
     {
         double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
         for (int s = first; s < slots; s++) panelSum[s] = 0;
@@ -15,7 +19,13 @@ internal ref partial struct BestArmQuadrature
             nodes[2 * n] = centre - offset;
             nodes[2 * n + 1] = centre + offset;
         }
-        for (int s = first; s < slots; s++) EvaluateNodes(s);
+        nodes[PanelNodes] = t1;
+        for (int s = first; s < slots; s++)
+        {
+            EvaluateNodes(s);
+            panelEndUpper[s] = nodeUpper[PanelNodes];
+        }
+        double g1 = PanelEndProduct(keepEnd);
         double derivativeSum = 0, momentSum = 0;
         for (int n = 0; n < abscissas.Length; n++)
         {
@@ -38,14 +48,34 @@ internal ref partial struct BestArmQuadrature
         if (!resolved && improving && splittable)
         {
             splits++;
-            double gm = EvaluateProduct(centre, store: false);
-            IntegratePanel(t0, g0, centre, gm, depth + 1, defect);
-            IntegratePanel(centre, gm, t1, g1, depth + 1, defect);
-            return;
+            double gm = IntegratePanel(t0, g0, centre, depth + 1, keepEnd: false, defect);
+            IntegratePanel(centre, gm, t1, depth + 1, keepEnd: false, defect);
+            return g1;
         }
         for (int s = first; s < slots; s++) total[s] += panelSum[s];
         expectedMaximumSum += momentSum;
         defectSum += defect;
+        return g1;
+    }
+
+    /// <summary>G at the panel's right end from the values evaluated with its nodes, as <see cref="EvaluateProduct"/> forms it.</summary>
+    private readonly double PanelEndProduct(bool keep)
+    {
+        double product = 1.0;
+        for (int s = first; s < slots; s++)
+        {
+            double f = nodeCdf[s * PanelPoints + PanelNodes];
+            int m = slotMultiplicity[s];
+            double p = m == 1 ? f : Math.Pow(f, m);
+            product *= p;
+            if (keep)
+            {
+                endPower[s] = p;
+                endCdf[s] = f;
+                endUpper[s] = panelEndUpper[s];
+            }
+        }
+        return product;
     }
 
     /// <summary>
@@ -56,7 +86,7 @@ internal ref partial struct BestArmQuadrature
     {
         for (int s = first; s < slots; s++)
         {
-            double c = nodeCdf[s * PanelNodes + node];
+            double c = nodeCdf[s * PanelPoints + node];
             int m = slotMultiplicity[s];
             power[s] = m == 1 ? c : Math.Pow(c, m);
         }
@@ -66,8 +96,8 @@ internal ref partial struct BestArmQuadrature
         for (int s = first; s < slots; s++)
         {
             int m = slotMultiplicity[s];
-            double own = m == 1 ? 1.0 : Math.Pow(nodeCdf[s * PanelNodes + node], m - 1);
-            double integrand = nodeDensity[s * PanelNodes + node] * own * prefix * suffix[s + 1];
+            double own = m == 1 ? 1.0 : Math.Pow(nodeCdf[s * PanelPoints + node], m - 1);
+            double integrand = nodeDensity[s * PanelPoints + node] * own * prefix * suffix[s + 1];
             panelSum[s] += w * integrand;
             derivative += m * integrand;
             prefix *= power[s];
@@ -75,12 +105,12 @@ internal ref partial struct BestArmQuadrature
         return derivative;
     }
 
-    /// <summary>One slot's density and CDF at all of the panel's nodes, as <see cref="EvaluateArm"/> gives them one by one.</summary>
+    /// <summary>One slot's density and CDF at all of the panel's nodes and its right end, as <see cref="EvaluateArm"/> gives them one by one.</summary>
     private readonly void EvaluateNodes(int slot)
     {
         IMarginal arm = arms[slotArm[slot]];
-        var f = nodeDensity.Slice(slot * PanelNodes, PanelNodes);
-        var cdfValues = nodeCdf.Slice(slot * PanelNodes, PanelNodes);
+        var f = nodeDensity.Slice(slot * PanelPoints, PanelPoints);
+        var cdfValues = nodeCdf.Slice(slot * PanelPoints, PanelPoints);
         switch (coordinate)
         {
             case Coordinate.AboveLowerBound when arm.LowerBound == origin:
@@ -90,8 +120,8 @@ internal ref partial struct BestArmQuadrature
                 MarginalProfile.EvaluateNearBoundMany(arm, upper: true, nodes, f, cdfValues, nodeUpper);
                 break;
             default:
-                Span<double> x = stackalloc double[PanelNodes];
-                for (int j = 0; j < PanelNodes; j++) x[j] = Position(nodes[j]);
+                Span<double> x = stackalloc double[PanelPoints];
+                for (int j = 0; j < PanelPoints; j++) x[j] = Position(nodes[j]);
                 MarginalProfile.EvaluateMany(arm, x, f, cdfValues, nodeUpper);
                 break;
         }

@@ -149,8 +149,7 @@ internal ref partial struct BestArmQuadrature
             // which is cheaper than cutting the panel at every arm's end.
             double t1 = PanelEnd(t0, settings.WidthScale * width, tEnd);
             // The end values are kept for the next panel's start; g0 has already been taken from the old ones.
-            double g1 = EvaluateProduct(t1, store: true);
-            IntegratePanel(t0, g0, t1, g1, 0);
+            IntegratePanel(t0, g0, t1, 0, keepEnd: true);
             t0 = t1;
         }
         return t0;
@@ -217,8 +216,7 @@ internal ref partial struct BestArmQuadrature
             }
             double g0 = 1.0;
             for (int s = first; s < slots; s++) g0 *= endPower[s];
-            double g1 = EvaluateProduct(t1, store: true);
-            IntegratePanel(t0, g0, t1, g1, 0);
+            IntegratePanel(t0, g0, t1, 0, keepEnd: true);
             t0 = t1;
         }
         return start;

@@ -36,6 +36,10 @@ internal ref partial struct BestArmQuadrature
 
     private const int PanelNodes = 20;
 
+    // A panel's Gauss–Legendre nodes and its right end, evaluated together: the end's values are needed for
+    // the derivative check and as the next panel's start, and lanes left over by the twenty nodes take it.
+    private const int PanelPoints = PanelNodes + 1;
+
     private enum Coordinate { Position, AboveLowerBound, BelowUpperBound }
 
     private readonly IReadOnlyList<IMarginal> arms;
@@ -45,9 +49,9 @@ internal ref partial struct BestArmQuadrature
     // Per group while groups are formed, then per slot: the surviving groups sorted by their upper support end.
     private readonly Span<double> lo, hi, above, below, breaks, power, suffix, panelSum, total, endPower, endCdf, endUpper;
 
-    // One panel's nodes in the order they are summed (pairs left, right), and every live slot's density and
-    // CDF at them, slot by slot: each arm is evaluated for the whole panel in one call.
-    private readonly Span<double> nodes, nodeDensity, nodeCdf, nodeUpper;
+    // One panel's nodes in the order they are summed (pairs left, right) followed by its right end, and every
+    // live slot's density and CDF at them, slot by slot: each arm is evaluated for the whole panel in one call.
+    private readonly Span<double> nodes, nodeDensity, nodeCdf, nodeUpper, panelEndUpper;
     private readonly Span<int> hashes, order, groupOf, representative, multiplicity, slotOfGroup, slotArm, slotMultiplicity;
 
     private int slots;       // surviving groups
@@ -69,10 +73,11 @@ internal ref partial struct BestArmQuadrature
         above = doubles.Slice(d, k); d += k;
         below = doubles.Slice(d, k); d += k;
         breaks = doubles.Slice(d, k); d += k;
-        nodes = doubles.Slice(d, PanelNodes); d += PanelNodes;
-        nodeUpper = doubles.Slice(d, PanelNodes); d += PanelNodes;
-        nodeDensity = doubles.Slice(d, k * PanelNodes); d += k * PanelNodes;
-        nodeCdf = doubles.Slice(d, k * PanelNodes); d += k * PanelNodes;
+        nodes = doubles.Slice(d, PanelPoints); d += PanelPoints;
+        nodeUpper = doubles.Slice(d, PanelPoints); d += PanelPoints;
+        nodeDensity = doubles.Slice(d, k * PanelPoints); d += k * PanelPoints;
+        nodeCdf = doubles.Slice(d, k * PanelPoints); d += k * PanelPoints;
+        panelEndUpper = doubles.Slice(d, k); d += k;
         power = doubles.Slice(d, k); d += k;
         suffix = doubles.Slice(d, k + 1); d += k + 1;
         panelSum = doubles.Slice(d, k); d += k;
@@ -97,7 +102,7 @@ internal ref partial struct BestArmQuadrature
         splits = 0;
     }
 
-    internal static int DoublesNeeded(int k) => 12 * k + 1 + 2 * PanelNodes * (k + 1);
+    internal static int DoublesNeeded(int k) => 13 * k + 1 + 2 * PanelPoints * (k + 1);
 
     internal static int IntsNeeded(int k) => 8 * k;
 
