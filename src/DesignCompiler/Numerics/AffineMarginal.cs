@@ -16,7 +16,15 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProf
         Inner = inner;
         Scale = scale;
         Shift = shift;
+        isIdentity = scale == 1 && shift == 0;
     }
+
+    // Most arms are valued as they are measured; the quadrature then evaluates the inner marginal directly,
+    // which gives the same bits without copying every panel through the transform.
+    private readonly bool isIdentity;
+
+    /// <summary>u = x: the quadrature may evaluate the inner marginal in its place.</summary>
+    internal bool IsIdentity => isIdentity;
 
     public IMarginal Inner { get; }
 
@@ -84,6 +92,11 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProf
 
     void IQuadratureProfile.EvaluateMany(ReadOnlySpan<double> u, Span<double> density, Span<double> cdf, Span<double> upperTail)
     {
+        if (isIdentity)
+        {
+            MarginalProfile.EvaluateMany(Inner, u, density, cdf, upperTail);
+            return;
+        }
         Span<double> x = stackalloc double[u.Length];
         for (int j = 0; j < u.Length; j++) x[j] = Unmap(u[j]);
         MarginalProfile.EvaluateMany(Inner, x, density, cdf, upperTail);
@@ -92,6 +105,11 @@ public sealed class AffineMarginal : IMarginal, IQuadratureProfile, IBoundedProf
 
     void IBoundedProfile.EvaluateNearBoundMany(bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
     {
+        if (isIdentity)
+        {
+            MarginalProfile.EvaluateNearBoundMany(Inner, upper, distance, density, cdf, upperTail);
+            return;
+        }
         Span<double> inner = stackalloc double[distance.Length];
         for (int j = 0; j < distance.Length; j++) inner[j] = distance[j] / Math.Abs(Scale);
         MarginalProfile.EvaluateNearBoundMany(Inner, upper == Scale > 0, inner, density, cdf, upperTail);

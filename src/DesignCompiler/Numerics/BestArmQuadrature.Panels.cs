@@ -12,7 +12,6 @@ internal ref partial struct BestArmQuadrature
         double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
         for (int s = first; s < slots; s++) panelSum[s] = 0;
         var abscissas = GaussLegendre20.Abscissas.AsSpan();
-        var weights = GaussLegendre20.Weights.AsSpan();
         for (int n = 0; n < abscissas.Length; n++)
         {
             double offset = half * abscissas[n];
@@ -20,20 +19,14 @@ internal ref partial struct BestArmQuadrature
             nodes[2 * n + 1] = centre + offset;
         }
         nodes[PanelNodes] = t1;
+        sharedReady = 0;
         for (int s = first; s < slots; s++)
         {
             EvaluateNodes(s);
             panelEndUpper[s] = nodeUpper[PanelNodes];
         }
         double g1 = PanelEndProduct(keepEnd);
-        double derivativeSum = 0, momentSum = 0;
-        for (int n = 0; n < abscissas.Length; n++)
-        {
-            double w = half * weights[n];
-            double atLeft = AccumulateNode(2 * n, w), atRight = AccumulateNode(2 * n + 1, w);
-            derivativeSum += w * (atLeft + atRight);
-            momentSum += w * (Position(nodes[2 * n]) * atLeft + Position(nodes[2 * n + 1]) * atRight);
-        }
+        AccumulatePanel(half, out double derivativeSum, out double momentSum);
         // Below an upper bound G decreases with t, so the panel integral is G(t0) − G(t1) there.
         double expected = coordinate == Coordinate.BelowUpperBound ? g0 - g1 : g1 - g0;
         double defect = Math.Abs(derivativeSum - expected);
@@ -64,7 +57,7 @@ internal ref partial struct BestArmQuadrature
         double product = 1.0;
         for (int s = first; s < slots; s++)
         {
-            double f = nodeCdf[s * PanelPoints + PanelNodes];
+            double f = nodeCdf[s * PanelStride + PanelNodes];
             int m = slotMultiplicity[s];
             double p = m == 1 ? f : Math.Pow(f, m);
             product *= p;
@@ -78,39 +71,31 @@ internal ref partial struct BestArmQuadrature
         return product;
     }
 
-    /// <summary>
-    /// Adds w · f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) at panel node <paramref name="node"/> to each live slot's
-    /// panel sum and returns the node's Σ_s m_s f_s F_s^(m−1) ∏_{t≠s} F_t^(m_t) = G′.
-    /// </summary>
-    private readonly double AccumulateNode(int node, double w)
-    {
-        for (int s = first; s < slots; s++)
-        {
-            double c = nodeCdf[s * PanelPoints + node];
-            int m = slotMultiplicity[s];
-            power[s] = m == 1 ? c : Math.Pow(c, m);
-        }
-        suffix[slots] = 1.0;
-        for (int s = slots - 1; s >= first; s--) suffix[s] = suffix[s + 1] * power[s];
-        double prefix = 1.0, derivative = 0.0;
-        for (int s = first; s < slots; s++)
-        {
-            int m = slotMultiplicity[s];
-            double own = m == 1 ? 1.0 : Math.Pow(nodeCdf[s * PanelPoints + node], m - 1);
-            double integrand = nodeDensity[s * PanelPoints + node] * own * prefix * suffix[s + 1];
-            panelSum[s] += w * integrand;
-            derivative += m * integrand;
-            prefix *= power[s];
-        }
-        return derivative;
-    }
-
     /// <summary>One slot's density and CDF at all of the panel's nodes and its right end, as <see cref="EvaluateArm"/> gives them one by one.</summary>
-    private readonly void EvaluateNodes(int slot)
+    private void EvaluateNodes(int slot)
     {
         IMarginal arm = arms[slotArm[slot]];
-        var f = nodeDensity.Slice(slot * PanelPoints, PanelPoints);
-        var cdfValues = nodeCdf.Slice(slot * PanelPoints, PanelPoints);
+        var f = nodeDensity.Slice(slot * PanelStride, PanelPoints);
+        var cdfValues = nodeCdf.Slice(slot * PanelStride, PanelPoints);
+        if (PanelBeta(arm) is { } beta)
+        {
+            // Beta arms see the same (x, 1 − x) pairs and share their logarithms; see SharedPoints.
+            int orientation = coordinate switch
+            {
+                Coordinate.AboveLowerBound when arm.LowerBound == origin => NearLower,
+                Coordinate.BelowUpperBound when arm.UpperBound == origin => NearUpper,
+                _ => AtPosition,
+            };
+            bool logs = beta.UsesSharedLogs;
+            PrepareSharedPoints(orientation, logs);
+            int at = orientation * 4 * PanelPoints;
+            beta.EvaluatePanel(
+                sharedPoints.Slice(at, PanelPoints), sharedPoints.Slice(at + PanelPoints, PanelPoints),
+                logs ? sharedPoints.Slice(at + 2 * PanelPoints, PanelPoints) : default,
+                logs ? sharedPoints.Slice(at + 3 * PanelPoints, PanelPoints) : default,
+                f, cdfValues, nodeUpper);
+            return;
+        }
         switch (coordinate)
         {
             case Coordinate.AboveLowerBound when arm.LowerBound == origin:
@@ -124,6 +109,43 @@ internal ref partial struct BestArmQuadrature
                 for (int j = 0; j < PanelPoints; j++) x[j] = Position(nodes[j]);
                 MarginalProfile.EvaluateMany(arm, x, f, cdfValues, nodeUpper);
                 break;
+        }
+    }
+
+    private const int AtPosition = 0, NearLower = 1, NearUpper = 2;
+
+    // A beta marginal, or one valued as measured: those take the shared-point path.
+    private static BetaMarginal? PanelBeta(IMarginal arm) =>
+        arm as BetaMarginal ?? (arm is AffineMarginal { IsIdentity: true, Inner: BetaMarginal inner } ? inner : null);
+
+    /// <summary>
+    /// The panel's points as (x, y = 1 − x) for one orientation (at the position, or at the distance from a
+    /// lower or upper bound), and once some arm needs them their logarithms: computed once per panel and
+    /// orientation, where every beta arm would otherwise compute the same logarithms for itself.
+    /// </summary>
+    private void PrepareSharedPoints(int orientation, bool logs)
+    {
+        int at = orientation * 4 * PanelPoints;
+        var x = sharedPoints.Slice(at, PanelPoints);
+        var y = sharedPoints.Slice(at + PanelPoints, PanelPoints);
+        if ((sharedReady & (1 << orientation)) == 0)
+        {
+            for (int j = 0; j < PanelPoints; j++)
+            {
+                double t = nodes[j];
+                (x[j], y[j]) = orientation switch
+                {
+                    NearLower => (t, 1.0 - t),
+                    NearUpper => (1.0 - t, t),
+                    _ => (Position(t), 1.0 - Position(t)),
+                };
+            }
+            sharedReady |= 1 << orientation;
+        }
+        if (logs && (sharedReady & (8 << orientation)) == 0)
+        {
+            BetaKernel.LogsMany(x, y, sharedPoints.Slice(at + 2 * PanelPoints, PanelPoints), sharedPoints.Slice(at + 3 * PanelPoints, PanelPoints));
+            sharedReady |= 8 << orientation;
         }
     }
 

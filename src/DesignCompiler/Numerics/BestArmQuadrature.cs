@@ -40,6 +40,9 @@ internal ref partial struct BestArmQuadrature
     // the derivative check and as the next panel's start, and lanes left over by the twenty nodes take it.
     private const int PanelPoints = PanelNodes + 1;
 
+    // Each slot's values take three vector registers of eight: the points and padding.
+    private const int PanelStride = 24;
+
     private enum Coordinate { Position, AboveLowerBound, BelowUpperBound }
 
     private readonly IReadOnlyList<IMarginal> arms;
@@ -47,11 +50,16 @@ internal ref partial struct BestArmQuadrature
     private readonly QuadratureSettings settings;
 
     // Per group while groups are formed, then per slot: the surviving groups sorted by their upper support end.
-    private readonly Span<double> lo, hi, above, below, breaks, power, suffix, panelSum, total, endPower, endCdf, endUpper;
+    private readonly Span<double> lo, hi, above, below, breaks, suffix, panelSum, total, endPower, endCdf, endUpper;
 
     // One panel's nodes in the order they are summed (pairs left, right) followed by its right end, and every
     // live slot's density and CDF at them, slot by slot: each arm is evaluated for the whole panel in one call.
     private readonly Span<double> nodes, nodeDensity, nodeCdf, nodeUpper, panelEndUpper;
+
+    // The panel's points and their logarithms for beta arms, per orientation (PrepareSharedPoints), and
+    // which of them are ready for the current panel.
+    private readonly Span<double> sharedPoints;
+    private int sharedReady;
     private readonly Span<int> hashes, order, groupOf, representative, multiplicity, slotOfGroup, slotArm, slotMultiplicity;
 
     private int slots;       // surviving groups
@@ -75,11 +83,11 @@ internal ref partial struct BestArmQuadrature
         breaks = doubles.Slice(d, k); d += k;
         nodes = doubles.Slice(d, PanelPoints); d += PanelPoints;
         nodeUpper = doubles.Slice(d, PanelPoints); d += PanelPoints;
-        nodeDensity = doubles.Slice(d, k * PanelPoints); d += k * PanelPoints;
-        nodeCdf = doubles.Slice(d, k * PanelPoints); d += k * PanelPoints;
+        nodeDensity = doubles.Slice(d, k * PanelStride); d += k * PanelStride;
+        nodeCdf = doubles.Slice(d, k * PanelStride); d += k * PanelStride;
         panelEndUpper = doubles.Slice(d, k); d += k;
-        power = doubles.Slice(d, k); d += k;
-        suffix = doubles.Slice(d, k + 1); d += k + 1;
+        sharedPoints = doubles.Slice(d, 12 * PanelPoints); d += 12 * PanelPoints;
+        suffix = doubles.Slice(d, (k + 1) * Lanes); d += (k + 1) * Lanes;
         panelSum = doubles.Slice(d, k); d += k;
         total = doubles.Slice(d, k); d += k;
         endPower = doubles.Slice(d, k); d += k;
@@ -100,9 +108,10 @@ internal ref partial struct BestArmQuadrature
         expectedMaximumSum = 0;
         defectSum = 0;
         splits = 0;
+        sharedReady = 0;
     }
 
-    internal static int DoublesNeeded(int k) => 13 * k + 1 + 2 * PanelPoints * (k + 1);
+    internal static int DoublesNeeded(int k) => 11 * k + 14 * PanelPoints + 2 * PanelStride * k + (k + 1) * Lanes;
 
     internal static int IntsNeeded(int k) => 8 * k;
 

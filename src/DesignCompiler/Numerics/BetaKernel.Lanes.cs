@@ -7,46 +7,114 @@ internal readonly partial struct BetaKernel
     private const int Lanes = 8;
 
     /// <summary>
-    /// <see cref="LogPrefactor"/> at many points, eight at a time where the centred form applies: its series
-    /// need only arithmetic, so lanes give the scalar results bit for bit. Points where the form needs a
-    /// logarithm, and kernels that are not centred, are done one by one.
+    /// e^<see cref="LogPrefactor"/> at many points, eight at a time: the series, logarithms and exponential
+    /// all have lane forms that give the scalar results bit for bit. <paramref name="logX"/> and
+    /// <paramref name="logY"/> are ln x and ln y as <see cref="LogsMany"/> gives them, or empty to have them
+    /// computed here. Points with x or y outside (0, 1) get values the caller must not use.
     /// </summary>
-    internal void LogPrefactorMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> result)
+    internal void PrefactorMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY, Span<double> result)
     {
         int n = x.Length, done = 0;
-        if (centred && Vector512.IsHardwareAccelerated)
+        bool known = !logX.IsEmpty;
+        if (Vector512.IsHardwareAccelerated)
         {
-            Span<double> xs = stackalloc double[Lanes], ys = stackalloc double[Lanes], values = stackalloc double[Lanes];
+            Span<double> xs = stackalloc double[Lanes], ys = stackalloc double[Lanes], lxs = stackalloc double[Lanes], lys = stackalloc double[Lanes];
             for (; n - done >= 2; done += Lanes)
             {
                 int count = Math.Min(Lanes, n - done);
+                // A short group is padded with its last point; the padding's results are dropped.
                 for (int l = 0; l < Lanes; l++)
                 {
-                    xs[l] = x[done + Math.Min(l, count - 1)];
-                    ys[l] = y[done + Math.Min(l, count - 1)];
+                    int j = done + Math.Min(l, count - 1);
+                    xs[l] = x[j];
+                    ys[l] = y[j];
+                    if (known)
+                    {
+                        lxs[l] = logX[j];
+                        lys[l] = logY[j];
+                    }
                 }
-                ulong series = CentredLanes(Vector512.Create((ReadOnlySpan<double>)xs), Vector512.Create((ReadOnlySpan<double>)ys), values);
-                for (int l = 0; l < count; l++)
-                    result[done + l] = (series & (1UL << l)) != 0 ? values[l] : LogPrefactor(xs[l], ys[l]);
+                var xv = Vector512.Create((ReadOnlySpan<double>)xs);
+                var yv = Vector512.Create((ReadOnlySpan<double>)ys);
+                Vector512<double> logs;
+                if (form == Form.Centred) logs = CentredLanes(xv, yv);
+                else if (known) logs = FromLogsLanes(Vector512.Create((ReadOnlySpan<double>)lxs), Vector512.Create((ReadOnlySpan<double>)lys));
+                else logs = FromLogsLanes(LogOfLanes(xv, yv), LogOfLanes(yv, xv));
+                var values = RepeatableMath.Exp(logs);
+                for (int l = 0; l < count; l++) result[done + l] = values[l];
             }
         }
-        for (int j = done; j < n; j++) result[j] = LogPrefactor(x[j], y[j]);
+        for (int j = done; j < n; j++)
+        {
+            double logPrefactor = form == Form.Centred || !known ? LogPrefactor(x[j], y[j]) : LogPrefactorFromLogs(logX[j], logY[j]);
+            result[j] = RepeatableMath.Exp(logPrefactor);
+        }
     }
 
-    // The centred branch of LogPrefactor in lanes; returns the lanes whose two series arguments are within ½,
-    // the only ones whose values are valid.
-    private ulong CentredLanes(Vector512<double> x, Vector512<double> y, Span<double> values)
+    /// <summary>ln x and ln y at every point as <see cref="LogPrefactor"/> takes them, to be shared between arms.</summary>
+    internal static void LogsMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> logX, Span<double> logY)
     {
-        var half = Vector512.Create(0.5);
-        var gap = Vector512.Create(roundingGap);
-        var d = Vector512.ConditionalSelect(Vector512.LessThanOrEqual(x, half), x - Vector512.Create(mean), (Vector512.Create(meanComplement) - y) + gap);
-        var tx = d / Vector512.Create(mean);
-        var ty = (gap - d) / Vector512.Create(meanComplement);
-        var valid = Vector512.LessThanOrEqual(Vector512.Abs(tx), half) & Vector512.LessThanOrEqual(Vector512.Abs(ty), half);
-        var lx = SpecialFunctions.Log1pMinusXLanes(tx);
-        var ly = SpecialFunctions.Log1pMinusXLanes(ty);
-        var sum = Vector512.Create(A) * lx + Vector512.Create(B) * ly + d * Vector512.Create(linearSlope) + Vector512.Create(logConstant);
-        sum.CopyTo(values);
-        return valid.ExtractMostSignificantBits();
+        int n = x.Length, done = 0;
+        if (Vector512.IsHardwareAccelerated)
+        {
+            for (; n - done >= Lanes; done += Lanes)
+            {
+                var xv = Vector512.Create(x.Slice(done, Lanes));
+                var yv = Vector512.Create(y.Slice(done, Lanes));
+                LogOfLanes(xv, yv).CopyTo(logX.Slice(done, Lanes));
+                LogOfLanes(yv, xv).CopyTo(logY.Slice(done, Lanes));
+            }
+        }
+        for (int j = done; j < n; j++)
+        {
+            logX[j] = LogOf(x[j], y[j]);
+            logY[j] = LogOf(y[j], x[j]);
+        }
     }
+
+    // LogPrefactor's centred branch in lanes: the same operations in the same order, branches chosen per lane.
+    private Vector512<double> CentredLanes(Vector512<double> x, Vector512<double> y)
+    {
+        var gap = C(roundingGap);
+        var d = Vector512.ConditionalSelect(Vector512.LessThanOrEqual(x, C(0.5)), x - C(mean), (C(meanComplement) - y) + gap);
+        var tx = d / C(mean);
+        var ty = (gap - d) / C(meanComplement);
+        var lx = CentredTerm(tx, x, mean);
+        var ly = CentredTerm(ty, y, meanComplement);
+        return C(A) * lx + C(B) * ly + d * C(linearSlope) + C(logConstant);
+    }
+
+    private Vector512<double> FromLogsLanes(Vector512<double> lx, Vector512<double> ly) =>
+        form == Form.FromMean
+            ? C(A) * (lx - C(logOfMean)) + C(B) * (ly - C(logOfMeanComplement)) + C(logAtMean)
+            : C(A) * lx + C(B) * ly + C(logConstant);
+
+    // CentredTerm in lanes: each branch is computed only when some lane takes it, and the series only on the
+    // lanes within its reach (the others get 0 there), so that no lane drags the group into the long series.
+    private static Vector512<double> CentredTerm(Vector512<double> t, Vector512<double> u, double centre)
+    {
+        var size = Vector512.Abs(t);
+        var series = Vector512.LessThanOrEqual(size, C(CentredSeriesReach));
+        var seriesLanes = series.ExtractMostSignificantBits();
+        var result = SpecialFunctions.Log1pMinusXLanes(Vector512.ConditionalSelect(series, t, Vector512<double>.Zero));
+        if (seriesLanes == 0xFF) return result;
+        var fromT = Vector512.AndNot(Vector512.LessThanOrEqual(size, C(LogOfSeriesReach)), series);
+        if (fromT.ExtractMostSignificantBits() != 0)
+            result = Vector512.ConditionalSelect(fromT, RepeatableMath.Log1pSmall(t) - t, result);
+        var fromRatio = ~(series | fromT);
+        if (fromRatio.ExtractMostSignificantBits() != 0)
+            result = Vector512.ConditionalSelect(fromRatio, RepeatableMath.Log(u / C(centre)) - t, result);
+        return result;
+    }
+
+    private static Vector512<double> LogOfLanes(Vector512<double> u, Vector512<double> v)
+    {
+        var fromV = Vector512.GreaterThan(u, C(0.5)) & Vector512.LessThanOrEqual(v, C(LogOfSeriesReach));
+        var bits = fromV.ExtractMostSignificantBits();
+        if (bits == 0) return RepeatableMath.Log(u);
+        if (bits == 0xFF) return RepeatableMath.Log1pSmall(-v);
+        return Vector512.ConditionalSelect(fromV, RepeatableMath.Log1pSmall(-v), RepeatableMath.Log(u));
+    }
+
+    private static Vector512<double> C(double value) => Vector512.Create(value);
 }

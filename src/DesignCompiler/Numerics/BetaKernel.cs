@@ -13,8 +13,17 @@ namespace DesignCompiler.Numerics;
 /// </remarks>
 internal readonly partial struct BetaKernel
 {
-    private readonly bool centred;
+    // How ln prefactor is formed: from ln x and ln y (Plain, FromMean), which every beta arm evaluated at the
+    // same point can share, or from the series around the mean (Centred), which cannot be shared.
+    private enum Form : byte { Plain, FromMean, Centred }
+
+    // Up to here a·ln(x/p) + b·ln(y/q) from the shared logarithms keeps ln prefactor within about
+    // (a + b)·1e-16, some 4e-14; beyond, the centred series is worth its per-arm cost.
+    private const double SharedLogReach = 400;
+
+    private readonly Form form;
     private readonly double mean, meanComplement, roundingGap, linearSlope, logConstant, switchPoint;
+    private readonly double logOfMean, logOfMeanComplement, logAtMean;
     private readonly double[]? lowerTable, upperTable;
 
     /// <param name="tabulate">precompute the continued-fraction coefficients, worth it when the kernel is evaluated many times.</param>
@@ -28,8 +37,8 @@ internal readonly partial struct BetaKernel
         A = a;
         B = b;
         switchPoint = (a + 1.0) / (a + b + 2.0);
-        centred = Math.Min(a, b) >= SpecialFunctions.StirlingThreshold;
-        if (centred)
+        form = Math.Min(a, b) >= SpecialFunctions.StirlingThreshold ? Form.Centred : Form.Plain;
+        if (form == Form.Centred)
         {
             double s = a + b;
             mean = a / s;
@@ -40,6 +49,14 @@ internal readonly partial struct BetaKernel
             linearSlope = aqMinusBp / (mean * meanComplement);
             logConstant = 0.5 * Math.Log(b * mean) - SpecialFunctions.HalfLogTwoPi
                 + StirlingSeries.Correction(s) - StirlingSeries.Correction(a) - StirlingSeries.Correction(b);
+            if (s <= SharedLogReach)
+            {
+                // ln prefactor at the rounded mean by the centred form, then relative to it.
+                logAtMean = LogPrefactor(mean, meanComplement);
+                logOfMean = LogOf(mean, meanComplement);
+                logOfMeanComplement = LogOf(meanComplement, mean);
+                form = Form.FromMean;
+            }
         }
         else
         {
@@ -59,16 +76,24 @@ internal readonly partial struct BetaKernel
     /// </summary>
     public double LogPrefactor(double x, double y)
     {
-        if (centred)
+        if (form == Form.Centred)
         {
             double d = x <= 0.5 ? x - mean : (meanComplement - y) + roundingGap;
             double tx = d / mean, ty = (roundingGap - d) / meanComplement;
-            double lx = Math.Abs(tx) <= 0.5 ? SpecialFunctions.Log1pMinusX(tx) : Math.Log(x / mean) - tx;
-            double ly = Math.Abs(ty) <= 0.5 ? SpecialFunctions.Log1pMinusX(ty) : Math.Log(y / meanComplement) - ty;
+            double lx = CentredTerm(tx, x, mean), ly = CentredTerm(ty, y, meanComplement);
             return A * lx + B * ly + d * linearSlope + logConstant;
         }
-        return A * LogOf(x, y) + B * LogOf(y, x) + logConstant;
+        return LogPrefactorFromLogs(LogOf(x, y), LogOf(y, x));
     }
+
+    /// <summary>Whether <see cref="LogPrefactor"/> comes from ln x and ln y alone, so that arms can share them.</summary>
+    internal bool UsesSharedLogs => form != Form.Centred;
+
+    // The Plain and FromMean forms, from lx = ln x and ly = ln y as LogOf gives them.
+    private double LogPrefactorFromLogs(double lx, double ly) =>
+        form == Form.FromMean
+            ? A * (lx - logOfMean) + B * (ly - logOfMeanComplement) + logAtMean
+            : A * lx + B * ly + logConstant;
 
     /// <summary>ln of the density x^(a−1) y^(b−1) / B(a,b).</summary>
     public double LogDensity(double x, double y) => LogPrefactor(x, y) - LogOf(x, y) - LogOf(y, x);
@@ -78,7 +103,7 @@ internal readonly partial struct BetaKernel
     {
         if (!(x > 0)) { lower = 0; upper = 1; return; }
         if (!(y > 0)) { lower = 1; upper = 0; return; }
-        TailsFromPrefactor(x, y, Math.Exp(LogPrefactor(x, y)), out lower, out upper);
+        TailsFromPrefactor(x, y, RepeatableMath.Exp(LogPrefactor(x, y)), out lower, out upper);
     }
 
     /// <summary>Density and both tails at one point; they share the prefactor, the costly part.</summary>
@@ -91,7 +116,7 @@ internal readonly partial struct BetaKernel
             upper = 1 - lower;
             return;
         }
-        double prefactor = Math.Exp(LogPrefactor(x, y));
+        double prefactor = RepeatableMath.Exp(LogPrefactor(x, y));
         density = prefactor / (x * y);
         TailsFromPrefactor(x, y, prefactor, out lower, out upper);
     }
@@ -100,15 +125,24 @@ internal readonly partial struct BetaKernel
     /// <see cref="Evaluate"/> at many points (x[j], y[j]) at once, each result bit for bit the one it gives;
     /// the continued fractions run side by side in vector lanes.
     /// </summary>
-    internal void EvaluateMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> density, Span<double> lower, Span<double> upper)
+    internal void EvaluateMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> density, Span<double> lower, Span<double> upper) =>
+        EvaluateMany(x, y, default, default, density, lower, upper);
+
+    /// <summary>
+    /// <see cref="EvaluateMany(ReadOnlySpan{double}, ReadOnlySpan{double}, Span{double}, Span{double}, Span{double})"/>
+    /// with ln x and ln y at the points already known (<see cref="LogsMany"/>; empty spans when not), as the
+    /// P(best) quadrature shares them between the beta arms of a panel.
+    /// </summary>
+    internal void EvaluateMany(
+        ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY,
+        Span<double> density, Span<double> lower, Span<double> upper)
     {
         int n = x.Length;
         Span<double> prefactor = stackalloc double[n], lowerArguments = stackalloc double[n], upperArguments = stackalloc double[n];
         Span<double> fraction = stackalloc double[n];
         Span<int> lowerAt = stackalloc int[n], upperAt = stackalloc int[n];
         int lowerCount = 0, upperCount = 0;
-        Span<double> logPrefactor = stackalloc double[n];
-        LogPrefactorMany(x, y, logPrefactor);
+        PrefactorMany(x, y, logX, logY, prefactor);
         for (int j = 0; j < n; j++)
         {
             if (!(x[j] > 0) || !(y[j] > 0))
@@ -118,7 +152,6 @@ internal readonly partial struct BetaKernel
                 upper[j] = 1 - lower[j];
                 continue;
             }
-            prefactor[j] = Math.Exp(logPrefactor[j]);
             density[j] = prefactor[j] / (x[j] * y[j]);
             if (UseLowerFraction(x[j], y[j]))
             {
@@ -179,6 +212,25 @@ internal readonly partial struct BetaKernel
         return x <= switchPoint * (1.0 + 0.5 / Math.Sqrt(A + 1.0));
     }
 
-    // ln u where u + v = 1: the logarithm of whichever is smaller is taken directly, the other via log1p.
-    private static double LogOf(double u, double v) => u <= 0.5 ? Math.Log(u) : SpecialFunctions.Log1p(-v);
+    // ln(1+t) − t, with 1 + t = u/centre: by the series near 0 (its short and middle branches), then from t
+    // itself while it is in the logarithm's series range, and beyond that from u/centre, where the prefactor
+    // is at most e^(−0.04·a) anyway and one rounding of the ratio costs nothing that shows.
+    private static double CentredTerm(double t, double u, double centre)
+    {
+        double size = Math.Abs(t);
+        if (size <= CentredSeriesReach) return SpecialFunctions.Log1pMinusX(t);
+        if (size <= LogOfSeriesReach) return RepeatableMath.Log1pSmall(t) - t;
+        return RepeatableMath.Log(u / centre) - t;
+    }
+
+    // Within it Log1pMinusX never needs its long series, the costly one in lanes.
+    private const double CentredSeriesReach = 0.19;
+
+    // ln u where u + v = 1 and the smaller of the two is exact: ln(1 − v) comes from v itself while
+    // 1 − v is within the series' range, since forming 1 − v would round v's digits away.
+    private static double LogOf(double u, double v) =>
+        u > 0.5 && v <= LogOfSeriesReach ? RepeatableMath.Log1pSmall(-v) : RepeatableMath.Log(u);
+
+    // 1 − √½, slightly rounded down: RepeatableMath.Log1pSmall's range.
+    private const double LogOfSeriesReach = 0.2928932188134524;
 }

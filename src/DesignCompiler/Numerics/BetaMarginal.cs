@@ -115,6 +115,20 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
         kernel.EvaluateMany(x, y, density, cdf, upperTail);
     }
 
+    /// <summary>Whether <see cref="EvaluatePanel"/> uses the logarithms it is given.</summary>
+    internal bool UsesSharedLogs => kernel.UsesSharedLogs;
+
+    /// <summary>
+    /// The quadrature's panel evaluation: the points as (x, 1 − x) pairs, exactly as <see cref="IQuadratureProfile.EvaluateMany"/>
+    /// (y = 1 − x) or <see cref="IBoundedProfile.EvaluateNearBoundMany"/> (one of them the distance) form them,
+    /// with their logarithms from <see cref="BetaKernel.LogsMany"/>, which the panel's beta arms share.
+    /// Bit for bit what those give.
+    /// </summary>
+    internal void EvaluatePanel(
+        ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY,
+        Span<double> density, Span<double> cdf, Span<double> upperTail) =>
+        kernel.EvaluateMany(x, y, logX, logY, density, cdf, upperTail);
+
     void IBoundedProfile.EvaluateNearBoundMany(bool upper, ReadOnlySpan<double> distance, Span<double> density, Span<double> cdf, Span<double> upperTail)
     {
         Span<double> complement = stackalloc double[distance.Length];

@@ -9,9 +9,11 @@ namespace DesignCompiler.Numerics;
 /// probabilities; arms that cannot be best within 1e-16 get exactly 0.
 /// </summary>
 /// <remarks>
-/// The probabilities are renormalised to sum to 1; the returned error bound adds the quadrature's own
-/// panel-by-panel estimate, that renormalisation and the tails cut off at 1e-16 per arm. It is an estimate of
-/// the absolute error of each probability, typically 1e-14 and below 1e-12 in all the cases tested.
+/// The probabilities are renormalised to sum to 1; the returned error estimate adds the quadrature's own
+/// panel-by-panel check, that renormalisation and the tails cut off at 1e-16 per arm. It estimates the
+/// absolute error of each probability; on 1,800 simulated trial states of ten beta arms the true error was
+/// 6e-15 on average and at most 1.6e-12, at most 2.4 times the estimate (the check sees the sum over arms,
+/// whose errors partly cancel).
 /// E[max] is that of the maximum clamped to where all arms but 1e-16 of their mass lie: exact to that level
 /// for light tails, and the only finite answer for a Cauchy arm, whose mean does not exist.
 /// </remarks>

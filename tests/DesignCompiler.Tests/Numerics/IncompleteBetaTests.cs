@@ -70,7 +70,8 @@ public class IncompleteBetaTests
     [Fact]
     public void ExtremeParametersStayInRange()
     {
-        // The brief's parameter range [0.01, 1e7]: values are probabilities and the two tails add up.
+        // Parameters from 0.01 to 1e7, beyond any posterior a season's plots give: values are probabilities
+        // and the two tails add up.
         foreach (double a in new[] { 0.01, 1.0, 1e3, 1e7 })
         {
             foreach (double b in new[] { 0.01, 1.0, 1e3, 1e7 })

@@ -88,4 +88,32 @@ public class PanelEvaluationTests
             Assert.Equal(BitConverter.DoubleToInt64Bits(c), BitConverter.DoubleToInt64Bits(nearCdf[j]));
         }
     }
+
+    [Theory]
+    [InlineData(2.5, 7)]     // ln prefactor from ln x and ln(1 − x) directly
+    [InlineData(30, 70)]     // the same, relative to the mean
+    [InlineData(12.5, 20.25)]
+    [InlineData(400, 700)]   // the centred series, which ignores the shared logarithms
+    public void SharedLogarithmsGiveTheOnePointValuesBitForBit(double a, double b)
+    {
+        // The quadrature computes ln x and ln(1 − x) once per panel for all its beta arms; each arm must get
+        // exactly what it would compute alone.
+        var marginal = new BetaMarginal(a, b);
+        var x = Enumerable.Range(1, 21).Select(i => marginal.Quantile(i / 22.0)).ToArray();
+        var y = x.Select(v => 1.0 - v).ToArray();
+        var logX = new double[x.Length];
+        var logY = new double[x.Length];
+        BetaKernel.LogsMany(x, y, logX, logY);
+        var density = new double[x.Length];
+        var cdf = new double[x.Length];
+        var upper = new double[x.Length];
+        marginal.EvaluatePanel(x, y, logX, logY, density, cdf, upper);
+        for (int j = 0; j < x.Length; j++)
+        {
+            ((IQuadratureProfile)marginal).Evaluate(x[j], out double f, out double c, out double u);
+            Assert.Equal(BitConverter.DoubleToInt64Bits(f), BitConverter.DoubleToInt64Bits(density[j]));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(c), BitConverter.DoubleToInt64Bits(cdf[j]));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(u), BitConverter.DoubleToInt64Bits(upper[j]));
+        }
+    }
 }

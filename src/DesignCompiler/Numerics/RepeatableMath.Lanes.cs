@@ -1,0 +1,86 @@
+using System.Runtime.Intrinsics;
+
+namespace DesignCompiler.Numerics;
+
+internal static partial class RepeatableMath
+{
+    /// <summary><see cref="Exp"/> in eight lanes, each bit for bit the scalar result.</summary>
+    internal static Vector512<double> Exp(Vector512<double> x)
+    {
+        // Out-of-range lanes are computed on a clamped argument and replaced at the end; NaN stays NaN.
+        var clamped = Vector512.ConditionalSelect(Vector512.GreaterThan(x, C(710.0)), C(710.0), x);
+        clamped = Vector512.ConditionalSelect(Vector512.LessThan(clamped, C(-746.0)), C(-746.0), clamped);
+        var shifted = Vector512.FusedMultiplyAdd(clamped, C(InverseLn2), C(RoundingShifter));
+        var k = shifted.AsInt64() - C(RoundingShifter).AsInt64();
+        var kd = shifted - C(RoundingShifter);
+        var r = Vector512.FusedMultiplyAdd(-kd, C(Ln2Low), Vector512.FusedMultiplyAdd(-kd, C(Ln2), clamped));
+        var p = ExpPolynomial(r);
+        var half = Vector512.ShiftRightArithmetic(k, 1);
+        var result = p * PowerOfTwo(half) * PowerOfTwo(k - half);
+        result = Vector512.ConditionalSelect(Vector512.GreaterThan(x, C(OverflowAbove)), C(double.PositiveInfinity), result);
+        return Vector512.ConditionalSelect(Vector512.LessThan(x, C(UnderflowBelow)), Vector512<double>.Zero, result);
+    }
+
+    /// <summary><see cref="Log"/> in eight lanes, each bit for bit the scalar result.</summary>
+    internal static Vector512<double> Log(Vector512<double> x)
+    {
+        var subnormal = Vector512.LessThan(x, C(SmallestNormal));
+        var scaled = Vector512.ConditionalSelect(subnormal, x * C(TwoTo54), x);
+        var adjust = Vector512.ConditionalSelect(subnormal.AsInt64(), Vector512.Create(54L), Vector512<long>.Zero);
+        var bits = scaled.AsInt64();
+        var k = Vector512.ShiftRightArithmetic(bits - Vector512.Create(SqrtHalfBits), 52);
+        var f = (bits - Vector512.ShiftLeft(k, 52)).AsDouble() - C(1.0);
+        var kd = Vector512.ConvertToDouble(k - adjust);
+        var result = Vector512.FusedMultiplyAdd(kd, C(Ln2Upper), Log1pReduced(f) + kd * C(Ln2UpperLow));
+        result = Vector512.ConditionalSelect(Vector512.Equals(x, C(double.PositiveInfinity)), x, result);
+        result = Vector512.ConditionalSelect(Vector512.Equals(x, Vector512<double>.Zero), C(double.NegativeInfinity), result);
+        // Negative lanes and NaN: the comparison is false for both.
+        return Vector512.ConditionalSelect(Vector512.GreaterThanOrEqual(x, Vector512<double>.Zero), result, C(double.NaN));
+    }
+
+    /// <summary><see cref="Log1pSmall"/> in eight lanes.</summary>
+    internal static Vector512<double> Log1pSmall(Vector512<double> f) => Log1pReduced(f);
+
+    private static Vector512<double> Log1pReduced(Vector512<double> f)
+    {
+        var s = f / (C(2.0) + f);
+        var z = s * s;
+        var t = z * LogPolynomial(z);
+        return f - s * (f - t);
+    }
+
+    private static Vector512<double> ExpPolynomial(Vector512<double> r)
+    {
+        var p = Vector512.FusedMultiplyAdd(C(E13), r, C(E12));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E11));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E10));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E9));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E8));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E7));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E6));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E5));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E4));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E3));
+        p = Vector512.FusedMultiplyAdd(p, r, C(E2));
+        p = Vector512.FusedMultiplyAdd(p, r, C(1.0));
+        return Vector512.FusedMultiplyAdd(p, r, C(1.0));
+    }
+
+    private static Vector512<double> LogPolynomial(Vector512<double> z)
+    {
+        var p = Vector512.FusedMultiplyAdd(C(L11), z, C(L10));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L9));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L8));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L7));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L6));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L5));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L4));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L3));
+        p = Vector512.FusedMultiplyAdd(p, z, C(L2));
+        return Vector512.FusedMultiplyAdd(p, z, C(L1));
+    }
+
+    private static Vector512<double> PowerOfTwo(Vector512<long> k) => Vector512.ShiftLeft(k + Vector512.Create(ExponentBias), 52).AsDouble();
+
+    private static Vector512<double> C(double value) => Vector512.Create(value);
+}
