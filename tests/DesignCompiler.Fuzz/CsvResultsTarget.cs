@@ -17,6 +17,8 @@ internal sealed class CsvResultsTarget : IFuzzTarget
 
     public void Run(byte[] input) => ResultsCheck.Run(input, "returned.csv");
 
+    public IEnumerable<byte[]> WarmUpInputs() => GeneratedSeeds().Select(s => s.Content);
+
     public IEnumerable<(string Name, byte[] Content)> GeneratedSeeds()
     {
         var round = IssuedRound.CoverCrops;

@@ -23,6 +23,16 @@ internal sealed class DesignTarget : IFuzzTarget
 
     public IEnumerable<(string Name, byte[] Content)> GeneratedSeeds() => [];
 
+    /// <summary>
+    /// The embedded cover-crop example (its seeds are files fuzz.sh copies, which the harness does not
+    /// know the path of): whole, it is planned and rendered; cut in half, it reaches the diagnostics.
+    /// </summary>
+    public IEnumerable<byte[]> WarmUpInputs()
+    {
+        var example = IssuedRound.ExampleDesign;
+        return [example, example[..(example.Length / 2)]];
+    }
+
     public void Run(byte[] input)
     {
         var (text, problem) = SourceFiles.Decode("fuzzed.trial", input);

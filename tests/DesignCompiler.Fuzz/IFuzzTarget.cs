@@ -20,5 +20,8 @@ internal interface IFuzzTarget
     /// <summary>Seed inputs made in code (sheets as compile renders them, and spoilt copies); written by <c>--write-seeds DIR</c>.</summary>
     IEnumerable<(string Name, byte[] Content)> GeneratedSeeds();
 
+    /// <summary>Inputs run once before fuzzing starts (see <see cref="WarmUp"/>): together they reach every library the target loads.</summary>
+    IEnumerable<byte[]> WarmUpInputs();
+
     void Run(byte[] input);
 }

@@ -27,6 +27,9 @@ internal sealed class IssuedRound
 
     public static IssuedRound CoverCrops { get; } = Make("cover-crops.trial");
 
+    /// <summary>The bytes of the embedded cover-crop example design.</summary>
+    public static byte[] ExampleDesign => Resource("cover-crops.trial");
+
     public CheckedDesign Design { get; }
     public IOutcomeModel Model { get; }
     public IReadOnlyList<IssuedSheet> Sheets { get; }
@@ -40,15 +43,21 @@ internal sealed class IssuedRound
 
     private static IssuedRound Make(string resource)
     {
-        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(resource)
-            ?? throw new InvalidOperationException("the harness was built without the embedded " + resource);
-        using var reader = new StreamReader(stream);
-        var bound = DesignBinder.Check(new SourceText(resource, reader.ReadToEnd()));
+        var bound = DesignBinder.Check(new SourceText(resource, System.Text.Encoding.UTF8.GetString(Resource(resource))));
         var design = bound.Design ?? throw new InvalidOperationException(resource + " does not check clean");
         var plan = RoundPlanner.For(design).Planner!.Plan(new TrialState(design.Arms.Count), 1).Plan
             ?? throw new InvalidOperationException(resource + " plans no round 1");
         var (files, _) = RoundOutputs.Render(plan, design, Path.GetFileNameWithoutExtension(resource));
         return new IssuedRound(design, plan, files.Single(f => f.Name.EndsWith(".csv", StringComparison.Ordinal)).Content,
             files.Single(f => f.Name.EndsWith(".xlsx", StringComparison.Ordinal)).Content);
+    }
+
+    private static byte[] Resource(string name)
+    {
+        using var stream = Assembly.GetExecutingAssembly().GetManifestResourceStream(name)
+            ?? throw new InvalidOperationException("the harness was built without the embedded " + name);
+        using var bytes = new MemoryStream();
+        stream.CopyTo(bytes);
+        return bytes.ToArray();
     }
 }

@@ -4,7 +4,7 @@ namespace DesignCompiler.Fuzz;
 
 /// <summary>
 /// <c>DesignCompiler.Fuzz TARGET</c> runs under afl-fuzz (SharpFuzz's out-of-process loop, so a
-/// stack overflow is a recorded crash rather than a dead fork server).
+/// stack overflow is a recorded crash rather than a dead fork server, behind <see cref="WarmForkServer"/>).
 /// <c>DesignCompiler.Fuzz TARGET --replay FILE...</c> runs saved inputs once each, outside the
 /// fuzzer, and prints what each did: for triage, and to check a corpus after a fix.
 /// </summary>
@@ -19,12 +19,24 @@ internal static class Program
         if (args.Length == 3 && args[1] == "--write-seeds") return WriteSeeds(target, args[2]);
         if (args.Length > 1) return Usage();
 
+        // Under afl this process is the fork server; the loop processes it starts warm up before
+        // their first input (WarmForkServer says why it is not SharpFuzz's own server).
+        if (WarmForkServer.UnderAfl && !WarmForkServer.IsLoopProcess)
+        {
+            WarmForkServer.Serve();
+            return 0;
+        }
+        if (WarmForkServer.IsLoopProcess) WarmForkServer.WarmUpAndSignal(target);
         Fuzzer.OutOfProcess.Run(stream => target.Run(ReadAll(stream)));
         return 0;
     }
 
     private static int Replay(IFuzzTarget target, IEnumerable<string> paths)
     {
+        // Warmed as the fuzzing loop is, so each time printed is the input's own, not the first input's start-up.
+        var warming = System.Diagnostics.Stopwatch.GetTimestamp();
+        WarmUp.Run(target);
+        Console.WriteLine($"warm  {Elapsed(warming),8:F1} ms  (warm-up)");
         var failed = 0;
         foreach (var path in paths)
         {

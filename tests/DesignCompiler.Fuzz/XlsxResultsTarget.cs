@@ -21,5 +21,10 @@ internal sealed class XlsxResultsTarget : IFuzzTarget
         yield return ("blank.xlsx", workbook);
         // A workbook cut short, as a sync that stopped half-way leaves it.
         yield return ("truncated.xlsx", workbook[..(workbook.Length / 2)]);
+        // The CSV sheet under a workbook's name: the reader tells them apart by content, so this
+        // reaches the text path that short mutated inputs take.
+        yield return ("csv-named-xlsx.xlsx", IssuedRound.CoverCrops.BlankSheet);
     }
+
+    public IEnumerable<byte[]> WarmUpInputs() => GeneratedSeeds().Select(s => s.Content);
 }

@@ -30,9 +30,9 @@ for assembly in DesignCompiler.dll Sprache.dll; do dotnet sharpfuzz "$bin/$assem
 
 
 findings=$work/$target/findings
-# -t 1000: an input that takes over a second is a hang (a seed that times out while the runtime
-# warms up is skipped with a warning). -m none: the .NET runtime reserves
-# far more address space than afl's default memory limit allows.
+# -t 1000: an input that takes over a second is a hang (the harness warms each fuzzing process up
+# before afl's clock runs, so start-up is never timed; README.md says how). -m none: the .NET runtime
+# reserves far more address space than afl's default memory limit allows.
 export AFL_SKIP_BIN_CHECK=1 AFL_NO_AFFINITY=1 AFL_SKIP_CPUFREQ=1 AFL_I_DONT_CARE_ABOUT_MISSING_CRASHES=1 AFL_NO_UI=1
 # Resume where an earlier run stopped, if there was one.
 input=(-i "$seeds")
