@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.InteropServices;
 using System.Runtime.Intrinsics;
 
@@ -17,6 +18,9 @@ internal ref partial struct BestArmQuadrature
     /// which give the same bits whether the hardware has them or the runtime emulates them, and with sums
     /// in a fixed order, so results never depend on the machine.
     /// </remarks>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private readonly void AccumulatePanel(double half, out double derivativeSum, out double momentSum)
     {
         var weights = GaussLegendre20.Weights.AsSpan();
@@ -71,6 +75,7 @@ internal ref partial struct BestArmQuadrature
     }
 
     // The sum of the eight lanes in a fixed order: halves, quarters, then the last pair.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static double Sum(Vector512<double> v)
     {
         var h = v.GetLower() + v.GetUpper();

@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace DesignCompiler.Numerics;
 
 /// <summary>One panel: the shared Gauss–Legendre nodes, the derivative check and its bisection.</summary>
@@ -7,6 +9,9 @@ internal ref partial struct BestArmQuadrature
     /// Integrates one panel, bisecting it while its derivative check fails, and returns G at its right end,
     /// which is evaluated with the nodes; <paramref name="keepEnd"/> keeps the values there for the next panel.
     /// </summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private double IntegratePanel(double t0, double g0, double t1, int depth, bool keepEnd, double parentDefect = double.PositiveInfinity)
     {
         double centre = 0.5 * (t0 + t1), half = 0.5 * (t1 - t0);
@@ -72,6 +77,7 @@ internal ref partial struct BestArmQuadrature
     }
 
     /// <summary>One slot's density and CDF at all of the panel's nodes and its right end, as <see cref="EvaluateArm"/> gives them one by one.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void EvaluateNodes(int slot)
     {
         IMarginal arm = arms[slotArm[slot]];
@@ -123,6 +129,7 @@ internal ref partial struct BestArmQuadrature
     /// lower or upper bound), and once some arm needs them their logarithms: computed once per panel and
     /// orientation, where every beta arm would otherwise compute the same logarithms for itself.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void PrepareSharedPoints(int orientation, bool logs)
     {
         int at = orientation * 4 * PanelPoints;

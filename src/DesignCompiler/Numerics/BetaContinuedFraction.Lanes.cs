@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
 
 namespace DesignCompiler.Numerics;
@@ -14,6 +15,9 @@ internal static partial class BetaContinuedFraction
     private const int Lanes = 8;
 
     /// <summary>h for each x, as <see cref="Evaluate"/> gives it.</summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void EvaluateMany(double a, double b, ReadOnlySpan<double> x, ReadOnlySpan<double> table, Span<double> h)
     {
         int done = 0;
@@ -39,6 +43,7 @@ internal static partial class BetaContinuedFraction
     /// Both registers' results into <paramref name="results"/>; false when a lane's approximants drift towards
     /// overflow, rare enough that the caller then simply redoes the group one argument at a time.
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static bool EvaluateLanes(double a, double b, Vector512<double> x1, Vector512<double> x2, ReadOnlySpan<double> table, Span<double> results)
     {
         var one = Vector512.Create(1.0);

@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace DesignCompiler.Numerics;
 
 /// <summary>
@@ -28,6 +30,9 @@ internal static partial class BetaContinuedFraction
     }
 
     /// <summary>The value h with I_x(a,b) = x^a (1−x)^b h / (a B(a,b)).</summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static double Evaluate(double a, double b, double x, ReadOnlySpan<double> table = default)
     {
         double previousA = 1.0, previousB = 1.0;
@@ -69,6 +74,7 @@ internal static partial class BetaContinuedFraction
         return currentA / currentB;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Coefficients(double a, double b, int m, out double even, out double odd)
     {
         double a2m = a + 2 * m;
@@ -78,6 +84,7 @@ internal static partial class BetaContinuedFraction
     }
 
     // The worst case, at the switch point, needs O(√max(a,b)) terms; this leaves a wide margin.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static int IterationLimit(double a, double b) =>
         200 + (int)Math.Min(1e6, 10.0 * Math.Sqrt(Math.Max(a, b)));
 }

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
 
 namespace DesignCompiler.Numerics;
@@ -12,6 +13,9 @@ internal readonly partial struct BetaKernel
     /// <paramref name="logY"/> are ln x and ln y as <see cref="LogsMany"/> gives them, or empty to have them
     /// computed here. Points with x or y outside (0, 1) get values the caller must not use.
     /// </summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void PrefactorMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY, Span<double> result)
     {
         int n = x.Length, done = 0;
@@ -52,6 +56,7 @@ internal readonly partial struct BetaKernel
     }
 
     /// <summary>ln x and ln y at every point as <see cref="LogPrefactor"/> takes them, to be shared between arms.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static void LogsMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, Span<double> logX, Span<double> logY)
     {
         int n = x.Length, done = 0;
@@ -73,6 +78,7 @@ internal readonly partial struct BetaKernel
     }
 
     // LogPrefactor's centred branch in lanes: the same operations in the same order, branches chosen per lane.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private Vector512<double> CentredLanes(Vector512<double> x, Vector512<double> y)
     {
         var gap = C(roundingGap);
@@ -84,6 +90,7 @@ internal readonly partial struct BetaKernel
         return C(A) * lx + C(B) * ly + d * C(linearSlope) + C(logConstant);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private Vector512<double> FromLogsLanes(Vector512<double> lx, Vector512<double> ly) =>
         form == Form.FromMean
             ? C(A) * (lx - C(logOfMean)) + C(B) * (ly - C(logOfMeanComplement)) + C(logAtMean)
@@ -91,6 +98,7 @@ internal readonly partial struct BetaKernel
 
     // CentredTerm in lanes: each branch is computed only when some lane takes it, and the series only on the
     // lanes within its reach (the others get 0 there), so that no lane drags the group into the long series.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> CentredTerm(Vector512<double> t, Vector512<double> u, double centre)
     {
         var size = Vector512.Abs(t);
@@ -107,6 +115,7 @@ internal readonly partial struct BetaKernel
         return result;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> LogOfLanes(Vector512<double> u, Vector512<double> v)
     {
         var fromV = Vector512.GreaterThan(u, C(0.5)) & Vector512.LessThanOrEqual(v, C(LogOfSeriesReach));
@@ -116,5 +125,6 @@ internal readonly partial struct BetaKernel
         return Vector512.ConditionalSelect(fromV, RepeatableMath.Log1pSmall(-v), RepeatableMath.Log(u));
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> C(double value) => Vector512.Create(value);
 }

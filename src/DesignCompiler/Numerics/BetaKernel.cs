@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace DesignCompiler.Numerics;
 
 /// <summary>
@@ -90,6 +92,7 @@ internal readonly partial struct BetaKernel
     internal bool UsesSharedLogs => form != Form.Centred;
 
     // The Plain and FromMean forms, from lx = ln x and ly = ln y as LogOf gives them.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private double LogPrefactorFromLogs(double lx, double ly) =>
         form == Form.FromMean
             ? A * (lx - logOfMean) + B * (ly - logOfMeanComplement) + logAtMean
@@ -133,6 +136,9 @@ internal readonly partial struct BetaKernel
     /// with ln x and ln y at the points already known (<see cref="LogsMany"/>; empty spans when not), as the
     /// P(best) quadrature shares them between the beta arms of a panel.
     /// </summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal void EvaluateMany(
         ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY,
         Span<double> density, Span<double> lower, Span<double> upper)
@@ -199,6 +205,7 @@ internal readonly partial struct BetaKernel
     // huge and the other small), so if the other fraction's argument is tiny and it is only just past its
     // own switch point (where it still converges reliably, within about 1/(2√(p+1)) of it in ratio),
     // that one is used instead.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private bool UseLowerFraction(double x, double y)
     {
         const double nearOne = 0.01;

@@ -50,7 +50,7 @@ public static partial class IncompleteBeta
     {
         if (a >= 1 && b >= 1)
         {
-            double z = p <= q ? StandardNormal.Quantile(p) : -StandardNormal.Quantile(q);
+            double z = p <= q ? StandardNormal.QuantileOfSmallTail(p) : -StandardNormal.QuantileOfSmallTail(q);
             double xn = -z;
             double al = (z * z - 3.0) / 6.0;
             double h = 2.0 / (1.0 / (2.0 * a - 1.0) + 1.0 / (2.0 * b - 1.0));

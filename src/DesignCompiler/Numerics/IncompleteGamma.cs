@@ -45,7 +45,7 @@ public static class IncompleteGamma
     {
         if (a > 1)
         {
-            double z = p <= q ? StandardNormal.Quantile(p) : -StandardNormal.Quantile(q);
+            double z = p <= q ? StandardNormal.QuantileOfSmallTail(p) : -StandardNormal.QuantileOfSmallTail(q);
             double c = 1.0 / (9.0 * a);
             double cube = 1.0 - c + z * Math.Sqrt(c);
             double guess = a * cube * cube * cube;

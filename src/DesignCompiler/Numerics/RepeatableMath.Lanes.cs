@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
 
 namespace DesignCompiler.Numerics;
@@ -5,6 +6,9 @@ namespace DesignCompiler.Numerics;
 internal static partial class RepeatableMath
 {
     /// <summary><see cref="Exp"/> in eight lanes, each bit for bit the scalar result.</summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static Vector512<double> Exp(Vector512<double> x)
     {
         // Out-of-range lanes are computed on a clamped argument and replaced at the end; NaN stays NaN.
@@ -22,6 +26,7 @@ internal static partial class RepeatableMath
     }
 
     /// <summary><see cref="Log"/> in eight lanes, each bit for bit the scalar result.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static Vector512<double> Log(Vector512<double> x)
     {
         var subnormal = Vector512.LessThan(x, C(SmallestNormal));
@@ -39,8 +44,10 @@ internal static partial class RepeatableMath
     }
 
     /// <summary><see cref="Log1pSmall"/> in eight lanes.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static Vector512<double> Log1pSmall(Vector512<double> f) => Log1pReduced(f);
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> Log1pReduced(Vector512<double> f)
     {
         var s = f / (C(2.0) + f);
@@ -49,6 +56,7 @@ internal static partial class RepeatableMath
         return f - s * (f - t);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> ExpPolynomial(Vector512<double> r)
     {
         var p = Vector512.FusedMultiplyAdd(C(E13), r, C(E12));
@@ -66,6 +74,7 @@ internal static partial class RepeatableMath
         return Vector512.FusedMultiplyAdd(p, r, C(1.0));
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> LogPolynomial(Vector512<double> z)
     {
         var p = Vector512.FusedMultiplyAdd(C(L11), z, C(L10));
@@ -80,7 +89,9 @@ internal static partial class RepeatableMath
         return Vector512.FusedMultiplyAdd(p, z, C(L1));
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> PowerOfTwo(Vector512<long> k) => Vector512.ShiftLeft(k + Vector512.Create(ExponentBias), 52).AsDouble();
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> C(double value) => Vector512.Create(value);
 }

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
 
 namespace DesignCompiler.Numerics;
@@ -8,6 +9,9 @@ public static partial class SpecialFunctions
     /// <see cref="Log1pMinusX"/> in eight lanes, for |x| ≤ ½ (the callers' range): every lane is bit for bit
     /// the scalar result, since each runs the same operations on the same branch of the series.
     /// </summary>
+    // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
+    // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static Vector512<double> Log1pMinusXLanes(Vector512<double> x)
     {
         var u = x / (Vector512.Create(2.0) + x);
@@ -36,5 +40,6 @@ public static partial class SpecialFunctions
         return -x * u + C(2.0) * u * v * series;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> C(double value) => Vector512.Create(value);
 }

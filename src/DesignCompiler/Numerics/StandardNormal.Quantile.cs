@@ -15,6 +15,15 @@ public static partial class StandardNormal
         return p > 0.5 ? -LowerHalfQuantile(1.0 - p) : LowerHalfQuantile(p);
     }
 
+    /// <summary>
+    /// <see cref="Quantile"/>, kept for the P(best) quadrature's tail mass: every support search starts from
+    /// Φ⁻¹(1e-16), for every arm of every call, and that one value need only be found once.
+    /// </summary>
+    internal static double QuantileOfSmallTail(double p) => p == QuadratureTail ? QuadratureTailQuantile : Quantile(p);
+
+    private const double QuadratureTail = BestArmQuadrature.TailMass;
+    private static readonly double QuadratureTailQuantile = Quantile(QuadratureTail);
+
     /// <summary>The z with 1 − Φ(z) = q, accurate for tiny q.</summary>
     public static double UpperQuantile(double q) => -Quantile(q);
 
