@@ -21,6 +21,7 @@ internal ref partial struct BestArmQuadrature
     // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
     // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    [SkipLocalsInit]
     private readonly void AccumulatePanel(double half, out double derivativeSum, out double momentSum)
     {
         var weights = GaussLegendre20.Weights.AsSpan();

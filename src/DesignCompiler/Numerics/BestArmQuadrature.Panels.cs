@@ -78,6 +78,7 @@ internal ref partial struct BestArmQuadrature
 
     /// <summary>One slot's density and CDF at all of the panel's nodes and its right end, as <see cref="EvaluateArm"/> gives them one by one.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    [SkipLocalsInit]
     private void EvaluateNodes(int slot)
     {
         IMarginal arm = arms[slotArm[slot]];

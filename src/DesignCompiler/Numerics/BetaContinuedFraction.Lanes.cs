@@ -18,6 +18,7 @@ internal static partial class BetaContinuedFraction
     // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
     // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    [SkipLocalsInit]
     internal static void EvaluateMany(double a, double b, ReadOnlySpan<double> x, ReadOnlySpan<double> table, Span<double> h)
     {
         int done = 0;
@@ -28,9 +29,14 @@ internal static partial class BetaContinuedFraction
             {
                 int count = Math.Min(2 * Lanes, x.Length - done);
                 // Short groups are padded with their last argument; the padding's results are dropped.
-                x.Slice(done, count).CopyTo(lanes);
-                lanes[count..].Fill(x[done + count - 1]);
-                if (EvaluateLanes(a, b, Vector512.Create((ReadOnlySpan<double>)lanes), Vector512.Create((ReadOnlySpan<double>)lanes[Lanes..]), table, lanes))
+                scoped ReadOnlySpan<double> group = x.Slice(done, count);
+                if (count < 2 * Lanes)
+                {
+                    group.CopyTo(lanes);
+                    lanes[count..].Fill(x[done + count - 1]);
+                    group = lanes;
+                }
+                if (EvaluateLanes(a, b, Vector512.Create(group), Vector512.Create(group[Lanes..]), table, lanes))
                     lanes[..count].CopyTo(h[done..]);
                 else
                     for (int i = done; i < done + count; i++) h[i] = Evaluate(a, b, x[i], table);

@@ -8,51 +8,70 @@ internal readonly partial struct BetaKernel
     private const int Lanes = 8;
 
     /// <summary>
-    /// e^<see cref="LogPrefactor"/> at many points, eight at a time: the series, logarithms and exponential
-    /// all have lane forms that give the scalar results bit for bit. <paramref name="logX"/> and
-    /// <paramref name="logY"/> are ln x and ln y as <see cref="LogsMany"/> gives them, or empty to have them
-    /// computed here. Points with x or y outside (0, 1) get values the caller must not use.
+    /// e^<see cref="LogPrefactor"/> at many points, and the density prefactor/(x·y), eight at a time: the
+    /// series, logarithms and exponential all have lane forms that give the scalar results bit for bit.
+    /// <paramref name="logX"/> and <paramref name="logY"/> are ln x and ln y as <see cref="LogsMany"/> gives
+    /// them, or empty to have them computed here. Points with x or y outside (0, 1) get values the caller
+    /// must not use.
     /// </summary>
     // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
     // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    internal void PrefactorMany(ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY, Span<double> result)
+    [SkipLocalsInit]
+    internal void PrefactorMany(
+        ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY,
+        Span<double> prefactor, Span<double> density)
     {
         int n = x.Length, done = 0;
         bool known = !logX.IsEmpty;
         if (Vector512.IsHardwareAccelerated)
         {
-            Span<double> xs = stackalloc double[Lanes], ys = stackalloc double[Lanes], lxs = stackalloc double[Lanes], lys = stackalloc double[Lanes];
+            Span<double> spill = stackalloc double[Lanes];
             for (; n - done >= 2; done += Lanes)
             {
                 int count = Math.Min(Lanes, n - done);
-                // A short group is padded with its last point; the padding's results are dropped.
-                for (int l = 0; l < Lanes; l++)
-                {
-                    int j = done + Math.Min(l, count - 1);
-                    xs[l] = x[j];
-                    ys[l] = y[j];
-                    if (known)
-                    {
-                        lxs[l] = logX[j];
-                        lys[l] = logY[j];
-                    }
-                }
-                var xv = Vector512.Create((ReadOnlySpan<double>)xs);
-                var yv = Vector512.Create((ReadOnlySpan<double>)ys);
+                var xv = LoadPadded(x, done, count);
+                var yv = LoadPadded(y, done, count);
                 Vector512<double> logs;
                 if (form == Form.Centred) logs = CentredLanes(xv, yv);
-                else if (known) logs = FromLogsLanes(Vector512.Create((ReadOnlySpan<double>)lxs), Vector512.Create((ReadOnlySpan<double>)lys));
+                else if (known) logs = FromLogsLanes(LoadPadded(logX, done, count), LoadPadded(logY, done, count));
                 else logs = FromLogsLanes(LogOfLanes(xv, yv), LogOfLanes(yv, xv));
                 var values = RepeatableMath.Exp(logs);
-                for (int l = 0; l < count; l++) result[done + l] = values[l];
+                Store(values, prefactor, done, count, spill);
+                Store(values / (xv * yv), density, done, count, spill);
             }
         }
         for (int j = done; j < n; j++)
         {
             double logPrefactor = form == Form.Centred || !known ? LogPrefactor(x[j], y[j]) : LogPrefactorFromLogs(logX[j], logY[j]);
-            result[j] = RepeatableMath.Exp(logPrefactor);
+            prefactor[j] = RepeatableMath.Exp(logPrefactor);
+            density[j] = prefactor[j] / (x[j] * y[j]);
         }
+    }
+
+    // Eight values from start; a short group is padded with its last value (the padding's results are dropped).
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static Vector512<double> LoadPadded(ReadOnlySpan<double> values, int start, int count) =>
+        count == Lanes ? Vector512.Create(values.Slice(start, Lanes)) : LoadShort(values, start, count);
+
+    [SkipLocalsInit]
+    private static Vector512<double> LoadShort(ReadOnlySpan<double> values, int start, int count)
+    {
+        Span<double> lanes = stackalloc double[Lanes];
+        for (int l = 0; l < Lanes; l++) lanes[l] = values[start + Math.Min(l, count - 1)];
+        return Vector512.Create((ReadOnlySpan<double>)lanes);
+    }
+
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static void Store(Vector512<double> values, Span<double> into, int start, int count, Span<double> spill)
+    {
+        if (count == Lanes)
+        {
+            values.CopyTo(into.Slice(start, Lanes));
+            return;
+        }
+        values.CopyTo(spill);
+        spill[..count].CopyTo(into.Slice(start, count));
     }
 
     /// <summary>ln x and ln y at every point as <see cref="LogPrefactor"/> takes them, to be shared between arms.</summary>

@@ -139,6 +139,7 @@ internal readonly partial struct BetaKernel
     // Kept out of tiered compilation: a simulation spends its first seconds here, and tiering would run that
     // time in unoptimised code and then compile it again; there is nothing for profile guidance to learn.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    [SkipLocalsInit]
     internal void EvaluateMany(
         ReadOnlySpan<double> x, ReadOnlySpan<double> y, ReadOnlySpan<double> logX, ReadOnlySpan<double> logY,
         Span<double> density, Span<double> lower, Span<double> upper)
@@ -148,7 +149,7 @@ internal readonly partial struct BetaKernel
         Span<double> fraction = stackalloc double[n];
         Span<int> lowerAt = stackalloc int[n], upperAt = stackalloc int[n];
         int lowerCount = 0, upperCount = 0;
-        PrefactorMany(x, y, logX, logY, prefactor);
+        PrefactorMany(x, y, logX, logY, prefactor, density);
         for (int j = 0; j < n; j++)
         {
             if (!(x[j] > 0) || !(y[j] > 0))
@@ -158,7 +159,6 @@ internal readonly partial struct BetaKernel
                 upper[j] = 1 - lower[j];
                 continue;
             }
-            density[j] = prefactor[j] / (x[j] * y[j]);
             if (UseLowerFraction(x[j], y[j]))
             {
                 lowerAt[lowerCount] = j;
