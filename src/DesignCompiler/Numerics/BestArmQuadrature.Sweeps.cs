@@ -7,7 +7,10 @@ internal ref partial struct BestArmQuadrature
     /// Integrates over [start, end] in segments that end at every arm's finite upper bound inside the range,
     /// where a density may jump to 0 or be singular. Each segment's lower half is swept upwards in x (in the
     /// distance above the lower bound of the arm that starts the range, for the first one) and its upper
-    /// half downwards in the distance below the bound that ends it, if that bound is finite.
+    /// half downwards in the distance below the bound that ends it, if that bound is finite. The last
+    /// segment is swept upwards to its end in one go when no arm's support comes near that bound
+    /// (<see cref="CrowdsBound"/>): then positions keep every digit the distances would, and one sweep needs
+    /// fewer panels than two halves that each end at the middle.
     /// </summary>
     private double Integrate(double start, double end, out double error)
     {
@@ -57,9 +60,9 @@ internal ref partial struct BestArmQuadrature
                 t0 = segmentStart;
             }
             double tMiddle = ToCoordinate(middle);
-            double t = IncreasingSweep(t0, tMiddle, ref panels, ref truncated);
-            bool remainderNegligible = t < tMiddle;
-            if (double.IsFinite(bound))
+            bool boundSweep = double.IsFinite(bound) && (!last || CrowdsBound(bound));
+            double t = IncreasingSweep(t0, boundSweep ? tMiddle : ToCoordinate(segmentEnd), ref panels, ref truncated);
+            if (boundSweep)
             {
                 SetCoordinate(Coordinate.BelowUpperBound, bound);
                 double tTop = DecreasingSweep(bound - middle, last, ref panels, ref truncated, out double product);
@@ -71,12 +74,6 @@ internal ref partial struct BestArmQuadrature
             }
             else
             {
-                if (!remainderNegligible)
-                {
-                    SetCoordinate(Coordinate.Position, 0.0);
-                    StartIncreasingSweep(middle);
-                    t = IncreasingSweep(middle, end, ref panels, ref truncated);
-                }
                 top = Position(t);
                 topProduct = AddMassBeyondTop();
             }
@@ -95,6 +92,21 @@ internal ref partial struct BestArmQuadrature
         for (int s = 0; s < slots; s++) total[s] /= sum;
         error = defectSum + Math.Abs(sum - 1.0) + 2.0 * k * TailMass + (truncated ? 1.0 - topProduct : 0.0);
         return expectedMaximum;
+    }
+
+    // An arm bounded at the top of the range crowds it when its support ends within this share of the
+    // bound's magnitude (or of its own sd, for bounds near 0), where x = bound − t starts to lose t's digits.
+    private const double NearBoundShare = 0.05;
+
+    /// <summary>Whether some arm bounded at <paramref name="bound"/> has its support end too close to it for positions.</summary>
+    private readonly bool CrowdsBound(double bound)
+    {
+        for (int s = 0; s < slots; s++)
+        {
+            IMarginal arm = arms[slotArm[s]];
+            if (arm.UpperBound == bound && !(below[s] >= NearBoundShare * Math.Max(Math.Abs(bound), arm.StdDev))) return true;
+        }
+        return false;
     }
 
     private void SetCoordinate(Coordinate c, double bound)
