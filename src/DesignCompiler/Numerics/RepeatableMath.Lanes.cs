@@ -18,7 +18,7 @@ internal static partial class RepeatableMath
         var k = shifted.AsInt64() - C(RoundingShifter).AsInt64();
         var kd = shifted - C(RoundingShifter);
         var r = Vector512.FusedMultiplyAdd(-kd, C(Ln2Low), Vector512.FusedMultiplyAdd(-kd, C(Ln2), clamped));
-        var p = ExpPolynomial(r);
+        var p = Horner(ExpCoefficients, r);
         var half = Vector512.ShiftRightArithmetic(k, 1);
         var result = p * PowerOfTwo(half) * PowerOfTwo(k - half);
         result = Vector512.ConditionalSelect(Vector512.GreaterThan(x, C(OverflowAbove)), C(double.PositiveInfinity), result);
@@ -52,41 +52,16 @@ internal static partial class RepeatableMath
     {
         var s = f / (C(2.0) + f);
         var z = s * s;
-        var t = z * LogPolynomial(z);
+        var t = z * Horner(LogCoefficients, z);
         return f - s * (f - t);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Vector512<double> ExpPolynomial(Vector512<double> r)
+    private static Vector512<double> Horner(ReadOnlySpan<double> coefficients, Vector512<double> x)
     {
-        var p = Vector512.FusedMultiplyAdd(C(E13), r, C(E12));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E11));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E10));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E9));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E8));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E7));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E6));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E5));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E4));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E3));
-        p = Vector512.FusedMultiplyAdd(p, r, C(E2));
-        p = Vector512.FusedMultiplyAdd(p, r, C(1.0));
-        return Vector512.FusedMultiplyAdd(p, r, C(1.0));
-    }
-
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Vector512<double> LogPolynomial(Vector512<double> z)
-    {
-        var p = Vector512.FusedMultiplyAdd(C(L11), z, C(L10));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L9));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L8));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L7));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L6));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L5));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L4));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L3));
-        p = Vector512.FusedMultiplyAdd(p, z, C(L2));
-        return Vector512.FusedMultiplyAdd(p, z, C(L1));
+        var p = C(coefficients[0]);
+        for (int i = 1; i < coefficients.Length; i++) p = Vector512.FusedMultiplyAdd(p, x, C(coefficients[i]));
+        return p;
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

@@ -36,17 +36,21 @@ internal static partial class RepeatableMath
     private const long SqrtHalfBits = 0x3FE6A09E667F3BCD;        // √½, where the mantissa range starts
     private const long ExponentBias = 1023;
 
-    // 1/n! for n = 13 … 2.
-    private const double E13 = 1.6059043836821613e-10, E12 = 2.08767569878681e-09, E11 = 2.505210838544172e-08;
-    private const double E10 = 2.755731922398589e-07, E9 = 2.7557319223985893e-06, E8 = 2.48015873015873e-05;
-    private const double E7 = 0.0001984126984126984, E6 = 0.001388888888888889, E5 = 0.008333333333333333;
-    private const double E4 = 0.041666666666666664, E3 = 0.16666666666666666, E2 = 0.5;
+    // e^r's Taylor coefficients 1/n! for n = 13 … 0, highest first.
+    private static readonly double[] ExpCoefficients =
+    [
+        1.6059043836821613e-10, 2.08767569878681e-09, 2.505210838544172e-08, 2.755731922398589e-07,
+        2.7557319223985893e-06, 2.48015873015873e-05, 0.0001984126984126984, 0.001388888888888889,
+        0.008333333333333333, 0.041666666666666664, 0.16666666666666666, 0.5, 1.0, 1.0,
+    ];
 
-    // 2/(2k+1) for k = 11 … 1.
-    private const double L11 = 0.08695652173913043, L10 = 0.09523809523809523, L9 = 0.10526315789473684;
-    private const double L8 = 0.11764705882352941, L7 = 0.13333333333333333, L6 = 0.15384615384615385;
-    private const double L5 = 0.18181818181818182, L4 = 0.2222222222222222, L3 = 0.2857142857142857;
-    private const double L2 = 0.4, L1 = 0.6666666666666666;
+    // The atanh series' 2/(2k+1) for k = 11 … 1, highest first.
+    private static readonly double[] LogCoefficients =
+    [
+        0.08695652173913043, 0.09523809523809523, 0.10526315789473684, 0.11764705882352941,
+        0.13333333333333333, 0.15384615384615385, 0.18181818181818182, 0.2222222222222222,
+        0.2857142857142857, 0.4, 0.6666666666666666,
+    ];
 
     /// <summary>e^x.</summary>
     internal static double Exp(double x)
@@ -58,7 +62,7 @@ internal static partial class RepeatableMath
         long k = BitConverter.DoubleToInt64Bits(shifted) - BitConverter.DoubleToInt64Bits(RoundingShifter);
         double kd = shifted - RoundingShifter;
         double r = Math.FusedMultiplyAdd(-kd, Ln2Low, Math.FusedMultiplyAdd(-kd, Ln2, x));
-        double p = ExpPolynomial(r);
+        double p = Horner(ExpCoefficients, r);
         // 2^k in two factors, each a normal double for every k that reaches here (−1075 … 1024).
         long half = k >> 1;
         return p * PowerOfTwo(half) * PowerOfTwo(k - half);
@@ -93,39 +97,16 @@ internal static partial class RepeatableMath
     {
         double s = f / (2.0 + f);
         double z = s * s;
-        double t = z * LogPolynomial(z);
+        double t = z * Horner(LogCoefficients, z);
         return f - s * (f - t);
     }
 
-    private static double ExpPolynomial(double r)
+    // Σ c_i x^(n−1−i) by Horner's rule, one fused multiply-add a step (the lane form takes the same steps).
+    private static double Horner(ReadOnlySpan<double> coefficients, double x)
     {
-        double p = Math.FusedMultiplyAdd(E13, r, E12);
-        p = Math.FusedMultiplyAdd(p, r, E11);
-        p = Math.FusedMultiplyAdd(p, r, E10);
-        p = Math.FusedMultiplyAdd(p, r, E9);
-        p = Math.FusedMultiplyAdd(p, r, E8);
-        p = Math.FusedMultiplyAdd(p, r, E7);
-        p = Math.FusedMultiplyAdd(p, r, E6);
-        p = Math.FusedMultiplyAdd(p, r, E5);
-        p = Math.FusedMultiplyAdd(p, r, E4);
-        p = Math.FusedMultiplyAdd(p, r, E3);
-        p = Math.FusedMultiplyAdd(p, r, E2);
-        p = Math.FusedMultiplyAdd(p, r, 1.0);
-        return Math.FusedMultiplyAdd(p, r, 1.0);
-    }
-
-    private static double LogPolynomial(double z)
-    {
-        double p = Math.FusedMultiplyAdd(L11, z, L10);
-        p = Math.FusedMultiplyAdd(p, z, L9);
-        p = Math.FusedMultiplyAdd(p, z, L8);
-        p = Math.FusedMultiplyAdd(p, z, L7);
-        p = Math.FusedMultiplyAdd(p, z, L6);
-        p = Math.FusedMultiplyAdd(p, z, L5);
-        p = Math.FusedMultiplyAdd(p, z, L4);
-        p = Math.FusedMultiplyAdd(p, z, L3);
-        p = Math.FusedMultiplyAdd(p, z, L2);
-        return Math.FusedMultiplyAdd(p, z, L1);
+        double p = coefficients[0];
+        for (int i = 1; i < coefficients.Length; i++) p = Math.FusedMultiplyAdd(p, x, coefficients[i]);
+        return p;
     }
 
     private static double PowerOfTwo(long k) => BitConverter.Int64BitsToDouble((k + ExponentBias) << 52);
