@@ -81,6 +81,17 @@ public sealed class BetaMarginal : IMarginal, IQuadratureProfile, IBoundedProfil
 
     void IQuadratureProfile.Support(double tailMass, out double lo, out double hi, out double aboveLowerBound, out double belowUpperBound)
     {
+        if (A >= BetaTailBound.SmallestShape && B >= BetaTailBound.SmallestShape)
+        {
+            // Log-concave: the density's tail bound, logarithms only. Kept inside the closed-form bounds that
+            // the screen relies on (they hold 1e-4 of the mass, so they only bind if the bound were far off).
+            ((IQuadratureProfile)this).WideSupport(tailMass, out double wideLo, out double wideHi);
+            aboveLowerBound = Math.Max(Math.Max(BetaTailBound.Distance(kernel, upper: false, tailMass), wideLo), 1e-300);
+            belowUpperBound = Math.Max(Math.Max(BetaTailBound.Distance(kernel, upper: true, tailMass), 1.0 - wideHi), 1e-300);
+            lo = aboveLowerBound;
+            hi = 1.0 - belowUpperBound;
+            return;
+        }
         const double coarse = 1e-3;
         IncompleteBeta.Quantile(kernel, tailMass, 1.0 - tailMass, coarse, out lo, out _);
         IncompleteBeta.Quantile(kernel, 1.0 - tailMass, tailMass, coarse, out hi, out belowUpperBound);

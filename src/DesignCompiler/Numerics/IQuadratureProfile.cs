@@ -11,7 +11,8 @@ internal interface IQuadratureProfile
     double UpperQuantile(double q);
 
     /// <summary>
-    /// Points beyond which each tail holds about <paramref name="tailMass"/>; a few per cent off is fine.
+    /// Points beyond which each tail holds about <paramref name="tailMass"/>: a few per cent over is fine, and a
+    /// bound that places them further out (holding less) is too.
     /// The distances lo − LowerBound and UpperBound − hi are also given, exact even where lo or hi
     /// themselves round onto the bound (+∞ for an infinite bound).
     /// </summary>

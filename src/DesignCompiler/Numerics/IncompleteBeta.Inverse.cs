@@ -46,7 +46,7 @@ public static partial class IncompleteBeta
     // and from the leading power laws at either end otherwise (after the starting values of invbetai in
     // Press et al., Numerical Recipes, 3rd ed.; the section number is from memory). Only the start
     // matters here: the Newton iteration fixes its accuracy.
-    private static double InitialGuess(double a, double b, double p, double q)
+    internal static double InitialGuess(double a, double b, double p, double q)
     {
         if (a >= 1 && b >= 1)
         {
