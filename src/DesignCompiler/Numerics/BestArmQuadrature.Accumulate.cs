@@ -66,14 +66,9 @@ internal ref partial struct BestArmQuadrature
 
     private static readonly Vector512<double> LaneIndex = Vector512.Create(0.0, 1, 2, 3, 4, 5, 6, 7);
 
-    // F^m lane by lane; m is 1 except for groups of identical arms.
-    private static Vector512<double> Power(Vector512<double> c, int m)
-    {
-        if (m == 1) return c;
-        Span<double> lanes = stackalloc double[Lanes];
-        for (int l = 0; l < Lanes; l++) lanes[l] = Math.Pow(c[l], m);
-        return Vector512.Create((ReadOnlySpan<double>)lanes);
-    }
+    // F^m; m is 1 except for groups of identical arms.
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    private static Vector512<double> Power(Vector512<double> c, int m) => m == 1 ? c : RepeatableMath.Power(c, m);
 
     // The sum of the eight lanes in a fixed order: halves, quarters, then the last pair.
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

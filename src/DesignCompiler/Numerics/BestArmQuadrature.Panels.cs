@@ -64,7 +64,7 @@ internal ref partial struct BestArmQuadrature
         {
             double f = nodeCdf[s * PanelStride + PanelNodes];
             int m = slotMultiplicity[s];
-            double p = m == 1 ? f : Math.Pow(f, m);
+            double p = m == 1 ? f : RepeatableMath.Power(f, m);
             product *= p;
             if (keep)
             {
@@ -165,7 +165,7 @@ internal ref partial struct BestArmQuadrature
         {
             EvaluateArm(s, node, out _, out double f, out double upper);
             int m = slotMultiplicity[s];
-            double p = m == 1 ? f : Math.Pow(f, m);
+            double p = m == 1 ? f : RepeatableMath.Power(f, m);
             product *= p;
             if (store)
             {

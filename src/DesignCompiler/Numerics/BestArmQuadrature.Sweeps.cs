@@ -256,7 +256,7 @@ internal ref partial struct BestArmQuadrature
                 if (t != s) others *= endPower[t];
             }
             int m = slotMultiplicity[s];
-            total[s] += endUpper[s] * (m == 1 ? 1.0 : Math.Pow(endCdf[s], m - 1)) * others;
+            total[s] += endUpper[s] * (m == 1 ? 1.0 : RepeatableMath.Power(endCdf[s], m - 1)) * others;
         }
         return product;
     }

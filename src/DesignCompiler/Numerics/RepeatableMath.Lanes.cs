@@ -25,6 +25,20 @@ internal static partial class RepeatableMath
         return Vector512.ConditionalSelect(Vector512.LessThan(x, C(UnderflowBelow)), Vector512<double>.Zero, result);
     }
 
+    /// <summary><see cref="Power(double, int)"/> in eight lanes with one exponent, each bit for bit the scalar result.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Vector512<double> Power(Vector512<double> x, int n)
+    {
+        var result = Vector512<double>.One;
+        while (true)
+        {
+            if ((n & 1) != 0) result *= x;
+            n >>= 1;
+            if (n == 0) return result;
+            x *= x;
+        }
+    }
+
     /// <summary><see cref="Log"/> in eight lanes, each bit for bit the scalar result.</summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     internal static Vector512<double> Log(Vector512<double> x)

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 namespace DesignCompiler.Numerics;
 
 /// <summary>
@@ -66,6 +67,24 @@ internal static partial class RepeatableMath
         // 2^k in two factors, each a normal double for every k that reaches here (−1075 … 1024).
         long half = k >> 1;
         return p * PowerOfTwo(half) * PowerOfTwo(k - half);
+    }
+
+    /// <summary>
+    /// x^n for n ≥ 0 by binary powering (square and multiply, from the low bit up): the same on every machine,
+    /// where a library pow need not be. As a product of n factors it is within (n−1)·2⁻⁵³ relative (squaring
+    /// doubles a relative error), 1e-15 for the tens of identical arms a trial has, 1.1e-13 at a thousand.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static double Power(double x, int n)
+    {
+        double result = 1.0;
+        while (true)
+        {
+            if ((n & 1) != 0) result *= x;
+            n >>= 1;
+            if (n == 0) return result;
+            x *= x;
+        }
     }
 
     /// <summary>ln x.</summary>

@@ -133,4 +133,33 @@ public class RepeatableMathTests
         double ulp = Math.Max(Math.BitIncrement(magnitude) - magnitude, double.Epsilon);
         return Math.Abs(actual - expected) / ulp;
     }
+
+    // x^n exactly (Python's fractions.Fraction of the double x, raised to n), rounded once to a double.
+    [Theory]
+    [InlineData(0.9, 10, 0.3486784401000001)]
+    [InlineData(0.999, 1000, 0.36769542477096373)]
+    [InlineData(0.1, 7, 1.0000000000000004e-07)]
+    [InlineData(1e-30, 10, 1.0000000000000009e-300)]
+    [InlineData(0.7310585786300049, 999, 1.225252342285837e-136)]
+    [InlineData(0.999999, 3, 0.999997000003)]
+    public void Integer_powers_are_within_their_rounding_budget_and_the_lanes_agree(double x, int n, double exact)
+    {
+        double power = RepeatableMath.Power(x, n);
+        // x^n is a product of n factors, and any order of forming a product of n numbers is within
+        // γ(n−1) ≈ (n−1)·u relative (N. J. Higham, Accuracy and Stability of Numerical Algorithms, 2nd ed., §3.1; from memory).
+        double budget = (n - 1) * 1.1102230246251565e-16 * (1 + 1e-10);
+        Assert.True(Math.Abs(power - exact) <= budget * exact, $"{x}^{n} = {power:R}, exact {exact:R}");
+        var lanes = RepeatableMath.Power(Vector512.Create(x), n);
+        for (int l = 0; l < 8; l++) Assert.Equal(BitConverter.DoubleToInt64Bits(power), BitConverter.DoubleToInt64Bits(lanes[l]));
+    }
+
+    [Fact]
+    public void Integer_powers_reach_the_subnormals_and_zero_like_the_exact_value()
+    {
+        // 0.5^1074 is the smallest subnormal exactly; one more halving rounds to zero (IEEE 754, common practice).
+        Assert.Equal(double.Epsilon, RepeatableMath.Power(0.5, 1074));
+        Assert.Equal(0.0, RepeatableMath.Power(0.5, 1076));
+        Assert.Equal(1.0, RepeatableMath.Power(0.3, 0));
+        Assert.Equal(0.0, RepeatableMath.Power(0.0, 5));
+    }
 }
