@@ -6,7 +6,8 @@ namespace DesignCompiler.Numerics;
 /// <summary>
 /// The continued fraction at many arguments of one distribution at once: the P(best) quadrature needs it at
 /// twenty nodes per panel for every arm. Eight arguments share one AVX-512 register, and two registers run
-/// side by side (the recurrence is a chain of dependent steps; a second chain fills the waits). Each lane
+/// side by side (the recurrence is a chain of dependent steps; a second chain fills the waits), or one alone
+/// for the last eight or fewer: a panel's twenty-one points take three registers, not four. Each lane
 /// runs exactly the scalar recurrence of <see cref="Evaluate"/> and keeps the approximant of the step at
 /// which it converged, so every result is bit for bit the scalar one, whatever the other lanes do.
 /// </summary>
@@ -28,6 +29,7 @@ internal static partial class BetaContinuedFraction
             for (; x.Length - done >= 2; done += 2 * Lanes)
             {
                 int count = Math.Min(2 * Lanes, x.Length - done);
+                bool pair = count > Lanes;
                 // Short groups are padded with their last argument; the padding's results are dropped.
                 scoped ReadOnlySpan<double> group = x.Slice(done, count);
                 if (count < 2 * Lanes)
@@ -36,7 +38,7 @@ internal static partial class BetaContinuedFraction
                     lanes[count..].Fill(x[done + count - 1]);
                     group = lanes;
                 }
-                if (EvaluateLanes(a, b, Vector512.Create(group), Vector512.Create(group[Lanes..]), table, lanes))
+                if (EvaluateLanes(a, b, Vector512.Create(group), Vector512.Create(group[Lanes..]), pair, table, lanes))
                     lanes[..count].CopyTo(h[done..]);
                 else
                     for (int i = done; i < done + count; i++) h[i] = Evaluate(a, b, x[i], table);
@@ -46,11 +48,12 @@ internal static partial class BetaContinuedFraction
     }
 
     /// <summary>
-    /// Both registers' results into <paramref name="results"/>; false when a lane's approximants drift towards
-    /// overflow, rare enough that the caller then simply redoes the group one argument at a time.
+    /// Both registers' results into <paramref name="results"/> (the second's only with <paramref name="pair"/>;
+    /// without, its chain is skipped); false when a lane's approximants drift towards overflow, rare enough
+    /// that the caller then simply redoes the group one argument at a time.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static bool EvaluateLanes(double a, double b, Vector512<double> x1, Vector512<double> x2, ReadOnlySpan<double> table, Span<double> results)
+    private static bool EvaluateLanes(double a, double b, Vector512<double> x1, Vector512<double> x2, bool pair, ReadOnlySpan<double> table, Span<double> results)
     {
         var one = Vector512.Create(1.0);
         var sum = Vector512.Create(a + b);
@@ -61,7 +64,7 @@ internal static partial class BetaContinuedFraction
         Vector512<double> previousA1 = one, previousB1 = one, currentA1 = one, currentB1 = one - sum * x1 / shifted;
         Vector512<double> previousA2 = one, previousB2 = one, currentA2 = one, currentB2 = one - sum * x2 / shifted;
         Vector512<double> resultA1 = currentA1, resultB1 = currentB1, resultA2 = currentA2, resultB2 = currentB2;
-        Vector512<double> live1 = Vector512<double>.AllBitsSet, live2 = Vector512<double>.AllBitsSet;
+        Vector512<double> live1 = Vector512<double>.AllBitsSet, live2 = pair ? Vector512<double>.AllBitsSet : Vector512<double>.Zero;
         int tabulated = table.Length / 2;
         int limit = IterationLimit(a, b);
         for (int m = 1; m <= limit; m++)
@@ -78,38 +81,39 @@ internal static partial class BetaContinuedFraction
             }
             var even1 = Vector512.Create(evenCoefficient) * x1;
             var odd1 = Vector512.Create(oddCoefficient) * x1;
-            var even2 = Vector512.Create(evenCoefficient) * x2;
-            var odd2 = Vector512.Create(oddCoefficient) * x2;
-
             var evenA1 = currentA1 + even1 * previousA1;
             var evenB1 = currentB1 + even1 * previousB1;
-            var evenA2 = currentA2 + even2 * previousA2;
-            var evenB2 = currentB2 + even2 * previousB2;
             currentA1 = evenA1 + odd1 * currentA1;
             currentB1 = evenB1 + odd1 * currentB1;
-            currentA2 = evenA2 + odd2 * currentA2;
-            currentB2 = evenB2 + odd2 * currentB2;
             previousA1 = evenA1;
             previousB1 = evenB1;
-            previousA2 = evenA2;
-            previousB2 = evenB2;
-
             var magnitude1 = Vector512.Abs(currentB1);
-            var magnitude2 = Vector512.Abs(currentB2);
-            var drift = ((Vector512.GreaterThan(magnitude1, big) | Vector512.LessThan(magnitude1, small)) & live1)
-                | ((Vector512.GreaterThan(magnitude2, big) | Vector512.LessThan(magnitude2, small)) & live2);
-            if (drift.ExtractMostSignificantBits() != 0) return false;
-
+            var drift = (Vector512.GreaterThan(magnitude1, big) | Vector512.LessThan(magnitude1, small)) & live1;
             var cross1 = currentA1 * previousB1;
-            var cross2 = currentA2 * previousB2;
             var converged1 = Vector512.LessThanOrEqual(Vector512.Abs(cross1 - previousA1 * currentB1), tolerance * Vector512.Abs(cross1)) & live1;
-            var converged2 = Vector512.LessThanOrEqual(Vector512.Abs(cross2 - previousA2 * currentB2), tolerance * Vector512.Abs(cross2)) & live2;
             resultA1 = Vector512.ConditionalSelect(converged1, currentA1, resultA1);
             resultB1 = Vector512.ConditionalSelect(converged1, currentB1, resultB1);
-            resultA2 = Vector512.ConditionalSelect(converged2, currentA2, resultA2);
-            resultB2 = Vector512.ConditionalSelect(converged2, currentB2, resultB2);
             live1 = Vector512.AndNot(live1, converged1);
-            live2 = Vector512.AndNot(live2, converged2);
+
+            if (pair)
+            {
+                var even2 = Vector512.Create(evenCoefficient) * x2;
+                var odd2 = Vector512.Create(oddCoefficient) * x2;
+                var evenA2 = currentA2 + even2 * previousA2;
+                var evenB2 = currentB2 + even2 * previousB2;
+                currentA2 = evenA2 + odd2 * currentA2;
+                currentB2 = evenB2 + odd2 * currentB2;
+                previousA2 = evenA2;
+                previousB2 = evenB2;
+                var magnitude2 = Vector512.Abs(currentB2);
+                drift |= (Vector512.GreaterThan(magnitude2, big) | Vector512.LessThan(magnitude2, small)) & live2;
+                var cross2 = currentA2 * previousB2;
+                var converged2 = Vector512.LessThanOrEqual(Vector512.Abs(cross2 - previousA2 * currentB2), tolerance * Vector512.Abs(cross2)) & live2;
+                resultA2 = Vector512.ConditionalSelect(converged2, currentA2, resultA2);
+                resultB2 = Vector512.ConditionalSelect(converged2, currentB2, resultB2);
+                live2 = Vector512.AndNot(live2, converged2);
+            }
+            if (drift.ExtractMostSignificantBits() != 0) return false;
             if ((live1 | live2).ExtractMostSignificantBits() == 0) break;
         }
         // Lanes that ran out of iterations end with the last approximant, as the scalar loop does.
