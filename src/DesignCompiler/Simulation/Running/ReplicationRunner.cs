@@ -104,12 +104,14 @@ public sealed class ReplicationRunner
     {
         var outcome = _design.Outcome;
         var regret = 0.0;
+        // Once per round: whether the field departs from the scenario scans every arm's missing share.
+        var shiftsActive = _shifts.Active;
         for (var k = 0; k < armOfPlot.Length; k++)
         {
             var arm = armOfPlot[k];
             var block = _blockOfPlot[k];
             record.Plots[arm, roundIndex]++;
-            if (_shifts.Active)
+            if (shiftsActive)
             {
                 // The plot was sown (it counts against stock and regret) but may give no result.
                 var lost = _shifts.IsLost(arm);
