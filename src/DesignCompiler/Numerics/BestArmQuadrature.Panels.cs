@@ -177,6 +177,19 @@ internal ref partial struct BestArmQuadrature
         return product;
     }
 
+    /// <summary>Keeps slots [from, to)'s values at a node as a panel start, exactly as <see cref="EvaluateProduct"/> would.</summary>
+    private readonly void StoreValues(int from, int to, double node)
+    {
+        for (int s = from; s < to; s++)
+        {
+            EvaluateArm(s, node, out _, out double f, out double upper);
+            int m = slotMultiplicity[s];
+            endPower[s] = m == 1 ? f : RepeatableMath.Power(f, m);
+            endCdf[s] = f;
+            endUpper[s] = upper;
+        }
+    }
+
     // An arm whose own bound is the origin is evaluated at the exact distance; any other at its position.
     private readonly void EvaluateArm(int slot, double t, out double f, out double cdfValue, out double upper)
     {

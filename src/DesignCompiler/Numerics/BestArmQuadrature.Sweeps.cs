@@ -192,6 +192,8 @@ internal ref partial struct BestArmQuadrature
         bool joined = false;
         while (t0 < tEnd)
         {
+            // The slots live in the last panel hold their values at t0 from its end.
+            int evaluated = first;
             while (first > 0 && JoinDistance(first - 1) <= t0)
             {
                 first--;
@@ -223,7 +225,9 @@ internal ref partial struct BestArmQuadrature
             }
             if (joined)
             {
-                EvaluateProduct(t0, store: true);
+                // Only the arms that joined need their values at t0; one at a time they cost a full
+                // evaluation each, where a panel shares its work between twenty-one points.
+                StoreValues(first, evaluated, t0);
                 joined = false;
             }
             double g0 = 1.0;
