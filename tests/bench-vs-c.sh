@@ -7,6 +7,8 @@
 #     checked to 1e-12; and the tighter 4 sd / 1e-13 ones the planner used before version 0.2);
 #   - plain Python on 20 trials of (a), per trial;
 #   - trialc check of a 1,000-arm design, less the start-up of checking a two-arm design.
+# trialc is published for this platform as README "Installing" says (precompiled); TRIALC_BUILD=plain
+# times the plain Release build instead.
 # Timings on a shared machine are noisy: every measurement is repeated ROUNDS times (default 3), C and C#
 # interleaved, and the median and the range are printed.
 #   tests/bench-vs-c.sh                      # REFERENCE_DIR defaults to ../shared/reference beside the repo
@@ -22,9 +24,17 @@ trap 'rm -rf "$work"' EXIT
 
 # The flags RESULTS.md uses.
 gcc -O2 -march=native -fopenmp -Wall -Wextra -o "$work/thompson_sim" "$ref/thompson_sim.c" -lm
-dotnet build "$root/src/DesignCompiler.Cli" -c Release -v quiet -nologo > "$work/build.log"
+# trialc as README "Installing" has it: published for this platform, so precompiled (ReadyToRun).
+# TRIALC_BUILD=plain measures the plain Release build instead (compiled on first use).
+rid=$(dotnet --info | sed -n 's/^ *RID: *//p' | head -n 1)
+if [ "${TRIALC_BUILD:-publish}" = plain ]; then
+  dotnet build "$root/src/DesignCompiler.Cli" -c Release -v quiet -nologo > "$work/build.log"
+  trialc="$root/src/DesignCompiler.Cli/bin/Release/net10.0/trialc"
+else
+  dotnet publish "$root/src/DesignCompiler.Cli" -c Release -r "$rid" --self-contained false -o "$work/trialc" -v quiet -nologo > "$work/build.log"
+  trialc="$work/trialc/trialc"
+fi
 dotnet build "$root/tests/DesignCompiler.Benchmarks" -c Release -v quiet -nologo >> "$work/build.log"
-trialc="$root/src/DesignCompiler.Cli/bin/Release/net10.0/trialc"
 bench="$root/tests/DesignCompiler.Benchmarks/bin/Release/net10.0/DesignCompiler.Benchmarks"
 design="$root/tests/DesignCompiler.Benchmarks/Designs/reference-pm-a.trial"
 
@@ -61,7 +71,7 @@ for r in $(seq 1 "$rounds"); do
   echo "check_1000 $(echo "$c - $b" | bc -l)" >> "$work/results"
 done
 
-python3 - "$work/results" "$reps" <<'PY'
+python3 - "$work/results" "$reps" "${TRIALC_BUILD:-publish}" <<'PY'
 import sys, statistics
 rows = {}
 for line in open(sys.argv[1]):
@@ -72,7 +82,7 @@ med = lambda k: statistics.median(rows[k])
 rng = lambda k: f"{min(rows[k]):.4g}-{max(rows[k]):.4g}"
 def line(what, c, cs, unit):
     print(f"{what:44s} C {med(c):9.4g} {unit} ({rng(c)})   C# {med(cs):9.4g} {unit} ({rng(cs)})   C#/C {med(cs)/med(c):5.2f}")
-print(f"medians of {len(rows['c_pbest'])} interleaved runs (range in brackets)")
+print(f"medians of {len(rows['c_pbest'])} interleaved runs (range in brackets); trialc build: {sys.argv[3]}")
 line(f"pm (a), {reps} trials, 1 thread", "c_sim_t1", "cs_sim_t1", "s")
 line(f"pm (a), {reps} trials, 2 threads", "c_sim_t2", "cs_sim_t2", "s")
 line("P(best) 10 beta arms, 1e-12 (planner)", "c_pbest", "cs_pbest", "us")
