@@ -99,7 +99,13 @@ internal readonly partial struct BetaKernel
             : A * lx + B * ly + logConstant;
 
     /// <summary>ln of the density x^(a−1) y^(b−1) / B(a,b).</summary>
-    public double LogDensity(double x, double y) => LogPrefactor(x, y) - LogOf(x, y) - LogOf(y, x);
+    public double LogDensity(double x, double y)
+    {
+        // The logarithms of x and y serve both the prefactor (unless it is centred) and the division by xy.
+        double lx = LogOf(x, y), ly = LogOf(y, x);
+        double logPrefactor = form == Form.Centred ? LogPrefactor(x, y) : LogPrefactorFromLogs(lx, ly);
+        return logPrefactor - lx - ly;
+    }
 
     /// <summary>Both tails, each computed directly where it is the small one, so neither cancels.</summary>
     public void Tails(double x, double y, out double lower, out double upper)
