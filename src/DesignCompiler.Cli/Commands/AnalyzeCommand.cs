@@ -2,6 +2,7 @@ using System.CommandLine;
 using DesignCompiler.Analysis.Trial;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Ledger;
+using DesignCompiler.Numerics;
 using DesignCompiler.Planning;
 using DesignCompiler.Rendering.Analysis;
 using DesignCompiler.Simulation.Estimators;
@@ -54,6 +55,7 @@ internal static class AnalyzeCommand
 
     private static int Run(CliConsole console, string designPath, string? ledgerPath, string? dataPath, long reps, string format, string? outPath)
     {
+        QuadratureWarmUp.Start();
         var (planner, exit) = SimulationCli.LoadPlanner(console, designPath);
         if (planner is null) return exit;
         var checkedDesign = planner.Design;

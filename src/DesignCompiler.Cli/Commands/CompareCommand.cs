@@ -1,5 +1,6 @@
 using System.CommandLine;
 using DesignCompiler.Diagnostics;
+using DesignCompiler.Numerics;
 using DesignCompiler.Rendering.Simulation;
 using DesignCompiler.Simulation;
 using DesignCompiler.Simulation.Comparisons;
@@ -37,6 +38,7 @@ internal static class CompareCommand
     private static int Run(CliConsole console, string pathA, string pathB, string? scenarioName, long reps, int threads,
         ulong? seed, double? marginGiven, string format, string? outPath)
     {
+        QuadratureWarmUp.Start();
         var (plannerA, exitA) = SimulationCli.LoadPlanner(console, pathA);
         var (plannerB, exitB) = SimulationCli.LoadPlanner(console, pathB);
         if (plannerA is null || plannerB is null) return Math.Max(exitA, exitB);

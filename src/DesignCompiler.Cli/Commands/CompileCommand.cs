@@ -1,6 +1,7 @@
 using System.CommandLine;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Ledger;
+using DesignCompiler.Numerics;
 using DesignCompiler.Planning;
 using DesignCompiler.Rendering;
 using DesignCompiler.Rendering.Models;
@@ -61,6 +62,7 @@ internal static class CompileCommand
     private static int Run(CliConsole console, string path, string? outDirectory, string format, string? ledger, string? amend, int? round,
         string[] templatePaths)
     {
+        QuadratureWarmUp.Start();
         if (format == "files" && string.IsNullOrWhiteSpace(outDirectory))
         {
             console.Error.WriteLine("trialc: compile needs --out DIR for the sheets, or --format json to print the plan");

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Ledger;
+using DesignCompiler.Numerics;
 using DesignCompiler.Results;
 
 namespace DesignCompiler.Cli.Commands;
@@ -28,6 +29,7 @@ internal static class RecordCommand
 
     private static int Run(CliConsole console, string designPath, string resultsPath, string? ledgerPath)
     {
+        QuadratureWarmUp.Start();
         var (checkedDesign, diagnostics) = DesignLoader.Load(designPath);
         if (console.Report(diagnostics) || checkedDesign is null) return ExitCodes.InputErrors;
         var (file, problems) = ResultFile.Read(resultsPath);

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using DesignCompiler.Numerics;
 using DesignCompiler.Planning;
 using DesignCompiler.Rendering.Simulation;
 using DesignCompiler.Simulation;
@@ -66,6 +67,7 @@ internal static class SimulateCommand
     private static int Run(CliConsole console, string path, string? scenarioName, long reps, int threads, ulong? seed,
         double? marginGiven, string format, string? outPath, Shard shard, bool writePartial, bool withTwin, bool bench)
     {
+        QuadratureWarmUp.Start();
         var (planner, exit) = SimulationCli.LoadPlanner(console, path);
         if (planner is null) return exit;
         var design = planner.Design;

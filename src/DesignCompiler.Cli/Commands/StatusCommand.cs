@@ -1,6 +1,7 @@
 using System.CommandLine;
 using DesignCompiler.Diagnostics;
 using DesignCompiler.Ledger;
+using DesignCompiler.Numerics;
 using DesignCompiler.Planning;
 using DesignCompiler.Rendering;
 using DesignCompiler.Rendering.Status;
@@ -42,6 +43,7 @@ internal static class StatusCommand
 
     private static int Run(CliConsole console, string designPath, string? ledgerPath, string format, string? outPath, string? templatePath)
     {
+        QuadratureWarmUp.Start();
         var (checkedDesign, diagnostics) = DesignLoader.Load(designPath);
         if (console.Report(diagnostics) || checkedDesign is null) return ExitCodes.InputErrors;
         UserTemplate? template = null;
