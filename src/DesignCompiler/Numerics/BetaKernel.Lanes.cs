@@ -1,5 +1,6 @@
 using System.Runtime.CompilerServices;
 using System.Runtime.Intrinsics;
+using System.Runtime.Intrinsics.X86;
 
 namespace DesignCompiler.Numerics;
 
@@ -49,6 +50,8 @@ internal readonly partial struct BetaKernel
         }
     }
 
+    private static readonly Vector512<long> LaneIndices = Vector512.Create(0L, 1, 2, 3, 4, 5, 6, 7);
+
     // Eight values from start; a short group is padded with its last value (the padding's results are dropped).
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static Vector512<double> LoadPadded(ReadOnlySpan<double> values, int start, int count) =>
@@ -57,6 +60,14 @@ internal readonly partial struct BetaKernel
     [SkipLocalsInit]
     private static Vector512<double> LoadShort(ReadOnlySpan<double> values, int start, int count)
     {
+        if (Avx512F.IsSupported && start + count >= Lanes)
+        {
+            // The eight values ending with the group's last, moved down into place, the last one repeated
+            // above them: one permutation instead of a gather lane by lane (a panel's third group is short).
+            var window = Vector512.Create(values.Slice(start + count - Lanes, Lanes));
+            var index = Vector512.Min(LaneIndices + Vector512.Create((long)(Lanes - count)), Vector512.Create((long)(Lanes - 1)));
+            return Avx512F.PermuteVar8x64(window, index);
+        }
         Span<double> lanes = stackalloc double[Lanes];
         for (int l = 0; l < Lanes; l++) lanes[l] = values[start + Math.Min(l, count - 1)];
         return Vector512.Create((ReadOnlySpan<double>)lanes);
