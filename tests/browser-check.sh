@@ -3,7 +3,7 @@
 # blank and prints on the pages it should: the crew sheet and the worked letterhead template one
 # page per block, the round report and the status page on one or two pages. Covers every shipped
 # example's round 1, and for the cover-crop trial a round 2 compiled from recorded results.
-# Run by .ci/run only where chromium is installed (Debian package 'chromium').
+# Run by .ci/run, which installs Debian's chromium package where it can.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 trialc="dotnet src/DesignCompiler.Cli/bin/Release/net10.0/trialc.dll"
