@@ -55,16 +55,10 @@ internal static partial class BetaContinuedFraction
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static bool EvaluateLanes(double a, double b, Vector512<double> x1, Vector512<double> x2, bool pair, ReadOnlySpan<double> table, Span<double> results)
     {
-        var one = Vector512.Create(1.0);
         var sum = Vector512.Create(a + b);
         var shifted = Vector512.Create(a + 1.0);
-        var big = Vector512.Create(Big);
-        var small = Vector512.Create(1.0 / Big);
-        var tolerance = Vector512.Create(Tolerance);
-        Vector512<double> previousA1 = one, previousB1 = one, currentA1 = one, currentB1 = one - sum * x1 / shifted;
-        Vector512<double> previousA2 = one, previousB2 = one, currentA2 = one, currentB2 = one - sum * x2 / shifted;
-        Vector512<double> resultA1 = currentA1, resultB1 = currentB1, resultA2 = currentA2, resultB2 = currentB2;
-        Vector512<double> live1 = Vector512<double>.AllBitsSet, live2 = pair ? Vector512<double>.AllBitsSet : Vector512<double>.Zero;
+        var first = new Chain(x1, sum, shifted, running: true);
+        var second = new Chain(x2, sum, shifted, running: pair);
         int tabulated = table.Length / 2;
         int limit = IterationLimit(a, b);
         for (int m = 1; m <= limit; m++)
@@ -79,46 +73,62 @@ internal static partial class BetaContinuedFraction
             {
                 Coefficients(a, b, m, out evenCoefficient, out oddCoefficient);
             }
-            var even1 = Vector512.Create(evenCoefficient) * x1;
-            var odd1 = Vector512.Create(oddCoefficient) * x1;
-            var evenA1 = currentA1 + even1 * previousA1;
-            var evenB1 = currentB1 + even1 * previousB1;
-            currentA1 = evenA1 + odd1 * currentA1;
-            currentB1 = evenB1 + odd1 * currentB1;
-            previousA1 = evenA1;
-            previousB1 = evenB1;
-            var magnitude1 = Vector512.Abs(currentB1);
-            var drift = (Vector512.GreaterThan(magnitude1, big) | Vector512.LessThan(magnitude1, small)) & live1;
-            var cross1 = currentA1 * previousB1;
-            var converged1 = Vector512.LessThanOrEqual(Vector512.Abs(cross1 - previousA1 * currentB1), tolerance * Vector512.Abs(cross1)) & live1;
-            resultA1 = Vector512.ConditionalSelect(converged1, currentA1, resultA1);
-            resultB1 = Vector512.ConditionalSelect(converged1, currentB1, resultB1);
-            live1 = Vector512.AndNot(live1, converged1);
-
-            if (pair)
-            {
-                var even2 = Vector512.Create(evenCoefficient) * x2;
-                var odd2 = Vector512.Create(oddCoefficient) * x2;
-                var evenA2 = currentA2 + even2 * previousA2;
-                var evenB2 = currentB2 + even2 * previousB2;
-                currentA2 = evenA2 + odd2 * currentA2;
-                currentB2 = evenB2 + odd2 * currentB2;
-                previousA2 = evenA2;
-                previousB2 = evenB2;
-                var magnitude2 = Vector512.Abs(currentB2);
-                drift |= (Vector512.GreaterThan(magnitude2, big) | Vector512.LessThan(magnitude2, small)) & live2;
-                var cross2 = currentA2 * previousB2;
-                var converged2 = Vector512.LessThanOrEqual(Vector512.Abs(cross2 - previousA2 * currentB2), tolerance * Vector512.Abs(cross2)) & live2;
-                resultA2 = Vector512.ConditionalSelect(converged2, currentA2, resultA2);
-                resultB2 = Vector512.ConditionalSelect(converged2, currentB2, resultB2);
-                live2 = Vector512.AndNot(live2, converged2);
-            }
+            var drift = first.Step(evenCoefficient, oddCoefficient);
+            if (pair) drift |= second.Step(evenCoefficient, oddCoefficient);
             if (drift.ExtractMostSignificantBits() != 0) return false;
-            if ((live1 | live2).ExtractMostSignificantBits() == 0) break;
+            if ((first.Running | second.Running).ExtractMostSignificantBits() == 0) break;
         }
-        // Lanes that ran out of iterations end with the last approximant, as the scalar loop does.
-        (Vector512.ConditionalSelect(live1, currentA1, resultA1) / Vector512.ConditionalSelect(live1, currentB1, resultB1)).CopyTo(results);
-        (Vector512.ConditionalSelect(live2, currentA2, resultA2) / Vector512.ConditionalSelect(live2, currentB2, resultB2)).CopyTo(results[Lanes..]);
+        first.Result.CopyTo(results);
+        second.Result.CopyTo(results[Lanes..]);
         return true;
+    }
+
+    /// <summary>
+    /// One register's recurrence: the last two approximants, the one at which each lane converged, and the
+    /// lanes still running. Each step is the scalar loop's step, lane by lane.
+    /// </summary>
+    private struct Chain
+    {
+        private readonly Vector512<double> x;
+        private Vector512<double> previousA, previousB, currentA, currentB, resultA, resultB;
+
+        internal Chain(Vector512<double> x, Vector512<double> sum, Vector512<double> shifted, bool running)
+        {
+            this.x = x;
+            previousA = previousB = currentA = Vector512<double>.One;
+            currentB = Vector512<double>.One - sum * x / shifted;
+            resultA = currentA;
+            resultB = currentB;
+            Running = running ? Vector512<double>.AllBitsSet : Vector512<double>.Zero;
+        }
+
+        /// <summary>All bits set in the lanes that have not converged yet.</summary>
+        internal Vector512<double> Running { readonly get; private set; }
+
+        /// <summary>Lanes that ran out of iterations end with the last approximant, as the scalar loop does.</summary>
+        internal readonly Vector512<double> Result =>
+            Vector512.ConditionalSelect(Running, currentA, resultA) / Vector512.ConditionalSelect(Running, currentB, resultB);
+
+        /// <summary>One step of the recurrence; returns the running lanes whose approximants drift towards overflow.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        internal Vector512<double> Step(double evenCoefficient, double oddCoefficient)
+        {
+            var even = Vector512.Create(evenCoefficient) * x;
+            var odd = Vector512.Create(oddCoefficient) * x;
+            var evenA = currentA + even * previousA;
+            var evenB = currentB + even * previousB;
+            currentA = evenA + odd * currentA;
+            currentB = evenB + odd * currentB;
+            previousA = evenA;
+            previousB = evenB;
+            var magnitude = Vector512.Abs(currentB);
+            var drift = (Vector512.GreaterThan(magnitude, Vector512.Create(Big)) | Vector512.LessThan(magnitude, Vector512.Create(1.0 / Big))) & Running;
+            var cross = currentA * previousB;
+            var converged = Vector512.LessThanOrEqual(Vector512.Abs(cross - previousA * currentB), Vector512.Create(Tolerance) * Vector512.Abs(cross)) & Running;
+            resultA = Vector512.ConditionalSelect(converged, currentA, resultA);
+            resultB = Vector512.ConditionalSelect(converged, currentB, resultB);
+            Running = Vector512.AndNot(Running, converged);
+            return drift;
+        }
     }
 }
