@@ -27,8 +27,14 @@ internal static class NormalTail
     {
         if (double.IsNaN(z)) return z;
         if (z < 0) return 1.0 - Upper(-z);
+        return UpperGivenDensity(z, StandardNormal.Pdf(z));
+    }
+
+    /// <summary><see cref="Upper"/> for z ≥ 0 when φ(z) is already known (exactly <see cref="StandardNormal.Pdf"/>'s value).</summary>
+    internal static double UpperGivenDensity(double z, double density)
+    {
         if (z > Underflow) return 0.0;
-        return StandardNormal.Pdf(z) * MillsTimesShift(z) / (z + Shift);
+        return density * MillsTimesShift(z) / (z + Shift);
     }
 
     /// <summary>Φ(z), to full relative accuracy in the left tail.</summary>
