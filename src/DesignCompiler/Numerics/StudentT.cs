@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace DesignCompiler.Numerics;
 
 /// <summary>The standard Student-t distribution with df degrees of freedom (df may be fractional).</summary>
@@ -39,7 +41,44 @@ public static class StudentT
     internal static void Tails(in BetaKernel kernel, double df, double t, out double lower, out double upper)
     {
         if (t == 0) { lower = 0.5; upper = 0.5; return; }
-        double absT = Math.Abs(t), x, y;
+        double farTail;
+        if (df > LargeDf) farTail = LargeDfTail(df, Math.Abs(t));
+        else
+        {
+            BetaArguments(df, t, out double x, out double y);
+            kernel.Tails(x, y, out double i, out _);
+            farTail = 0.5 * i;
+        }
+        FromFarTail(t, farTail, out lower, out upper);
+    }
+
+    /// <summary>
+    /// <see cref="Tails"/> at every t, each bit for bit its value: the incomplete betas of all the points go
+    /// through the kernel's lanes together, as the P(best) quadrature asks for a whole panel at once.
+    /// </summary>
+    [SkipLocalsInit]
+    internal static void TailsMany(in BetaKernel kernel, double df, ReadOnlySpan<double> t, Span<double> lower, Span<double> upper)
+    {
+        int n = t.Length;
+        if (df > LargeDf)
+        {
+            for (int j = 0; j < n; j++) Tails(kernel, df, t[j], out lower[j], out upper[j]);
+            return;
+        }
+        Span<double> x = stackalloc double[n], y = stackalloc double[n], density = stackalloc double[n], i = stackalloc double[n], complement = stackalloc double[n];
+        for (int j = 0; j < n; j++) BetaArguments(df, t[j], out x[j], out y[j]);
+        kernel.EvaluateMany(x, y, density, i, complement);
+        for (int j = 0; j < n; j++)
+        {
+            if (t[j] == 0) { lower[j] = 0.5; upper[j] = 0.5; continue; }
+            FromFarTail(t[j], 0.5 * i[j], out lower[j], out upper[j]);
+        }
+    }
+
+    // x = df/(df+t²) and y = t²/(df+t²), each formed directly so that neither is a rounded complement.
+    private static void BetaArguments(double df, double t, out double x, out double y)
+    {
+        double absT = Math.Abs(t);
         double t2 = t * t;
         if (double.IsInfinity(t2))
         {
@@ -51,13 +90,10 @@ public static class StudentT
             x = df / (df + t2);
             y = t2 / (df + t2);
         }
-        double farTail;
-        if (df > LargeDf) farTail = LargeDfTail(df, absT);
-        else
-        {
-            kernel.Tails(x, y, out double i, out _);
-            farTail = 0.5 * i;
-        }
+    }
+
+    private static void FromFarTail(double t, double farTail, out double lower, out double upper)
+    {
         double nearSide = 1.0 - farTail;
         if (t < 0) { lower = farTail; upper = nearSide; }
         else { lower = nearSide; upper = farTail; }

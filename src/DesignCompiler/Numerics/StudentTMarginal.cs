@@ -102,6 +102,17 @@ public sealed class StudentTMarginal : IMarginal, IQuadratureProfile, IEquatable
         StudentT.Tails(kernel, Df, (x - Location) / Scale, out cdf, out upperTail);
     }
 
+    void IQuadratureProfile.EvaluateMany(ReadOnlySpan<double> x, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> t = x.Length <= 64 ? stackalloc double[x.Length] : new double[x.Length];
+        for (int j = 0; j < x.Length; j++)
+        {
+            density[j] = Density(x[j]);
+            t[j] = (x[j] - Location) / Scale;
+        }
+        StudentT.TailsMany(kernel, Df, t, cdf, upperTail);
+    }
+
     public bool Equals(StudentTMarginal? other) =>
         other is not null && Df.Equals(other.Df) && Location.Equals(other.Location) && Scale.Equals(other.Scale);
 

@@ -90,6 +90,32 @@ public class PanelEvaluationTests
     }
 
     [Theory]
+    [InlineData(1)]
+    [InlineData(3.5)]
+    [InlineData(17)]
+    [InlineData(2000)]
+    [InlineData(2e5)]        // past StudentT.LargeDf, where the tails come from the expansion instead
+    public void StudentTPanelsAreBitForBitTheOnePointValues(double df)
+    {
+        // The t tails of a panel go through the beta kernel's lanes together; each point must get what it
+        // would alone, at the centre (t = 0 exactly), in both tails and far out.
+        var marginal = new StudentTMarginal(df, 3.0, 0.5);
+        var x = Enumerable.Range(0, 37).Select(i => 3.0 + 0.5 * (i - 18) * (i % 5 == 0 ? 40.0 : 0.7)).ToArray();
+        var density = new double[x.Length];
+        var cdf = new double[x.Length];
+        var upper = new double[x.Length];
+        ((IQuadratureProfile)marginal).EvaluateMany(x, density, cdf, upper);
+        for (int j = 0; j < x.Length; j++)
+        {
+            ((IQuadratureProfile)marginal).Evaluate(x[j], out double f, out double c, out double u);
+            Assert.Equal(BitConverter.DoubleToInt64Bits(f), BitConverter.DoubleToInt64Bits(density[j]));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(c), BitConverter.DoubleToInt64Bits(cdf[j]));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(u), BitConverter.DoubleToInt64Bits(upper[j]));
+        }
+        Assert.Equal(0.5, cdf[18]);
+    }
+
+    [Theory]
     [InlineData(2.5, 7)]     // ln prefactor from ln x and ln(1 − x) directly
     [InlineData(30, 70)]     // the same, relative to the mean
     [InlineData(12.5, 20.25)]
