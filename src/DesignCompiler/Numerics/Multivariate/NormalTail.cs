@@ -27,6 +27,7 @@ internal static class NormalTail
     {
         if (double.IsNaN(z)) return z;
         if (z < 0) return 1.0 - Upper(-z);
+        if (z > Underflow) return 0.0;
         return UpperGivenDensity(z, StandardNormal.Pdf(z));
     }
 
