@@ -7,7 +7,7 @@ namespace DesignCompiler.Numerics;
 /// For large a, ln prefactor = a·L((x−a)/a) + ½ ln(a/(2π)) − δ(a) with L(t) = ln(1+t) − t: the terms of size
 /// a·ln a that the direct form would subtract cancel analytically.
 /// </remarks>
-internal readonly struct GammaKernel
+internal readonly partial struct GammaKernel
 {
     private readonly bool centred;
     private readonly double logConstant;

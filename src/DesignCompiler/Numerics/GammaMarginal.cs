@@ -89,6 +89,14 @@ public sealed class GammaMarginal : IMarginal, IQuadratureProfile, IEquatable<Ga
         density = Rate * standardDensity;
     }
 
+    void IQuadratureProfile.EvaluateMany(ReadOnlySpan<double> x, Span<double> density, Span<double> cdf, Span<double> upperTail)
+    {
+        Span<double> standard = x.Length <= 64 ? stackalloc double[x.Length] : new double[x.Length];
+        for (int j = 0; j < x.Length; j++) standard[j] = Rate * x[j];
+        kernel.EvaluateMany(standard, density, cdf, upperTail);
+        for (int j = 0; j < x.Length; j++) density[j] = Rate * density[j];
+    }
+
     public bool Equals(GammaMarginal? other) => other is not null && Shape.Equals(other.Shape) && Rate.Equals(other.Rate);
 
     public override bool Equals(object? obj) => Equals(obj as GammaMarginal);
