@@ -73,7 +73,11 @@ internal static class MarginalProfile
             p.EvaluateNearBoundMany(upper, distance, density, cdf, upperTail);
             return;
         }
-        for (int j = 0; j < distance.Length; j++) EvaluateNearBound(m, upper, distance[j], out density[j], out cdf[j], out upperTail[j]);
+        // The positions EvaluateNearBound would form, evaluated together: a profile's EvaluateMany gives each the
+        // bits Evaluate would, and shares its work between them (a gamma arm's lower half is swept this way).
+        Span<double> x = distance.Length <= 64 ? stackalloc double[distance.Length] : new double[distance.Length];
+        for (int j = 0; j < distance.Length; j++) x[j] = upper ? m.UpperBound - distance[j] : m.LowerBound + distance[j];
+        EvaluateMany(m, x, density, cdf, upperTail);
     }
 
     internal static void EvaluateNearBound(
