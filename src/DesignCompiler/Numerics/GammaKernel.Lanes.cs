@@ -64,27 +64,16 @@ internal readonly partial struct GammaKernel
         }
     }
 
-    // LowerSeries at every point; groups short of eight are padded with their last point, whose copies are dropped.
-    [SkipLocalsInit]
-    private static void SeriesMany(double a, ReadOnlySpan<double> x, Span<double> sums)
-    {
-        Span<double> lanes = stackalloc double[Lanes];
-        for (int done = 0; done < x.Length; done += Lanes)
-        {
-            int count = Math.Min(Lanes, x.Length - done);
-            if (count < 3)
-            {
-                for (int j = done; j < done + count; j++) sums[j] = LowerSeries(a, x[j]);
-                continue;
-            }
-            Load(x, done, count, lanes);
-            SeriesLanes(a, Vector512.Create((ReadOnlySpan<double>)lanes)).CopyTo(lanes);
-            lanes[..count].CopyTo(sums[done..]);
-        }
-    }
+    // LowerSeries and UpperContinuedFraction at every point: groups of eight in lanes, a group short of eight padded
+    // with its last point (the copies are dropped), and one or two points left over done one at a time.
+    private static void SeriesMany(double a, ReadOnlySpan<double> x, Span<double> values) => InGroups(a, x, values, SeriesLanes, LowerSeries);
+
+    private static void FractionMany(double a, ReadOnlySpan<double> x, Span<double> values) => InGroups(a, x, values, FractionLanes, UpperContinuedFraction);
 
     [SkipLocalsInit]
-    private static void FractionMany(double a, ReadOnlySpan<double> x, Span<double> values)
+    private static void InGroups(
+        double a, ReadOnlySpan<double> x, Span<double> values,
+        Func<double, Vector512<double>, Vector512<double>> lanesForm, Func<double, double, double> scalarForm)
     {
         Span<double> lanes = stackalloc double[Lanes];
         for (int done = 0; done < x.Length; done += Lanes)
@@ -92,11 +81,11 @@ internal readonly partial struct GammaKernel
             int count = Math.Min(Lanes, x.Length - done);
             if (count < 3)
             {
-                for (int j = done; j < done + count; j++) values[j] = UpperContinuedFraction(a, x[j]);
+                for (int j = done; j < done + count; j++) values[j] = scalarForm(a, x[j]);
                 continue;
             }
             Load(x, done, count, lanes);
-            FractionLanes(a, Vector512.Create((ReadOnlySpan<double>)lanes)).CopyTo(lanes);
+            lanesForm(a, Vector512.Create((ReadOnlySpan<double>)lanes)).CopyTo(lanes);
             lanes[..count].CopyTo(values[done..]);
         }
     }
