@@ -1,3 +1,4 @@
+using System.Globalization;
 using DesignCompiler.Syntax;
 using DesignCompiler.Text;
 
@@ -13,6 +14,22 @@ public sealed record Criterion(CriterionMetric Metric, Comparison Comparison, do
         Comparison.Above => value > Threshold,
         _ => value < Threshold,
     };
+
+    /// <summary>
+    /// The value as a finding prints it: four decimals, or as many more as it takes for the printed number to
+    /// fall on the same side of the threshold as the value itself. Four alone would print P(best) 0.99986 as
+    /// "0.9999" beside "not met" for 'best &gt;= 0.9999', and a reader would rightly ask why.
+    /// </summary>
+    public string Show(double value)
+    {
+        var holds = Holds(value);
+        for (var digits = 4; digits <= 17; digits++)
+        {
+            var text = value.ToString("0." + new string('#', digits), CultureInfo.InvariantCulture);
+            if (Holds(double.Parse(text, CultureInfo.InvariantCulture)) == holds) return text;
+        }
+        return value.ToString("R", CultureInfo.InvariantCulture);
+    }
 
     public string Describe() =>
         FormattableString.Invariant($"{(Metric == CriterionMetric.Best ? "best" : "loss")} {Operator} {Threshold}");

@@ -64,7 +64,7 @@ public static class TrialStatusBuilder
             var meeting = inTrial.Where(i => i != design.Control && rule.Criterion.Holds(summary.Metric(rule.Criterion.Metric, i)))
                 .Select(i => design.Arms[i].Code).ToList();
             var who = string.Join(", ", meeting.Select(c =>
-                Invariant($"{c} ({MetricName(rule.Criterion)} {summary.Metric(rule.Criterion.Metric, design.FindArm(c)!.Index):0.####})")));
+                Invariant($"{c} ({MetricName(rule.Criterion)} {rule.Criterion.Show(summary.Metric(rule.Criterion.Metric, design.FindArm(c)!.Index))})")));
             var finding = !inForce
                 ? Invariant($"in force once {Math.Max(1, rule.AfterRound)} round(s) are recorded") + (meeting.Count == 0 ? "" : "; " + who + " would meet it now")
                 : meeting.Count == 0 ? "no arm in the trial meets it" + AlreadyDropped(design, state)
@@ -78,7 +78,7 @@ public static class TrialStatusBuilder
             var leader = summary.Leader;
             var value = summary.Metric(rule.Criterion.Metric, leader);
             var holds = rule.Criterion.Holds(value);
-            var finding = Invariant($"{design.Arms[leader].Code} leads with {MetricName(rule.Criterion)} {value:0.####}: ")
+            var finding = Invariant($"{design.Arms[leader].Code} leads with {MetricName(rule.Criterion)} {rule.Criterion.Show(value)}: ")
                 + (!inForce ? Invariant($"in force once {Math.Max(1, rule.AfterRound)} round(s) are recorded")
                     : holds ? "it holds" : "not met");
             rules.Add(new RuleStanding(RuleKind.Stop, "stop when " + rule.Criterion.Describe() + AfterText(rule.AfterRound), rule.AfterRound,

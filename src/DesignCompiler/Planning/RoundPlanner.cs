@@ -127,7 +127,7 @@ public sealed class RoundPlanner
                 if (rule.Criterion.Holds(value))
                 {
                     ws.StopReason = FormattableString.Invariant(
-                        $"the trial stops after round {state.RoundsCompleted}: '{rule.Criterion.Describe()}' holds for {design.Arms[leader].Code} ({value:0.####})");
+                        $"the trial stops after round {state.RoundsCompleted}: '{rule.Criterion.Describe()}' holds for {design.Arms[leader].Code} ({rule.Criterion.Show(value)})");
                     return false;
                 }
             }
