@@ -42,10 +42,25 @@ public static class XlsxSheet
         catch (Exception e) when (e is OpenXmlPackageException or InvalidDataException or XmlException or FileFormatException
                                       or IOException or InvalidOperationException or ArgumentException or NotSupportedException or FormatException)
         {
-            return Refused(path, "it is a zip file but not an .xlsx workbook (" + e.Message.TrimEnd('.') +
-                                 "); save the sheet from the spreadsheet as 'Excel workbook (.xlsx)' or as 'CSV UTF-8'");
+            return Refused(path, Damage(e) + "; open it in the spreadsheet and save it again as 'Excel workbook (.xlsx)', or save the sheet as 'CSV UTF-8'");
         }
     }
+
+    /// <summary>
+    /// What is wrong with a workbook the reader gave up on, in trialc's words: the reader's own messages name its
+    /// internals (element prefixes, stream classes), which tell a trial manager nothing about what to do.
+    /// </summary>
+    private static string Damage(Exception e) => e switch
+    {
+        XmlException xml when xml.LineNumber > 0 =>
+            FormattableString.Invariant($"it is an .xlsx workbook, but a part of it is damaged or cut short (its XML breaks off at line {xml.LineNumber}, position {xml.LinePosition})"),
+        XmlException => "it is an .xlsx workbook, but a part of it is damaged or cut short",
+        InvalidDataException or IOException or FileFormatException or OpenXmlPackageException =>
+            "it is a zip archive, but damaged or incomplete, as after a download or copy that stopped early",
+        // The package names a part (a worksheet, the shared strings) that the archive does not hold.
+        InvalidOperationException => "it is a zip archive, but a part of the workbook it lists is missing from it",
+        _ => "it is a zip archive, but a part of it holds a value an .xlsx workbook does not allow",
+    };
 
     private static (SheetTable?, IReadOnlyList<Diagnostic>) ReadWorkbook(string path, WorkbookPart workbookPart, Workbook workbook)
     {

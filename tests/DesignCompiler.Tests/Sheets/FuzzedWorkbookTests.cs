@@ -28,10 +28,10 @@ public sealed class FuzzedWorkbookTests
         { "hang-one-control-byte.xlsx", ":1:1: error TD4004: column 1 of the header is '' but must be 'round'" },
         { "hang-p-and-control-bytes.xlsx", ":1:1: error TD4004: column 1 of the header is 'P' but must be 'round'" },
         // From the final queue, the issued workbook damaged: the zip, the package, the XML, a cell's type, the sheets.
-        { "broken-zip-directory.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip file but not an .xlsx workbook" },
+        { "broken-zip-directory.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip archive, but a part of the workbook it lists is missing from it; open it in the spreadsheet and save it again" },
         { "workbook-xml-declaration-broken.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip file without a spreadsheet inside" },
-        { "worksheet-data-damaged.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip file but not an .xlsx workbook" },
-        { "cell-type-not-a-known-value.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip file but not an .xlsx workbook" },
+        { "worksheet-data-damaged.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip archive, but damaged or incomplete, as after a download or copy that stopped early;" },
+        { "cell-type-not-a-known-value.xlsx", ": error TD4030: the file is not a workbook trialc can read: it is a zip archive, but a part of it holds a value an .xlsx workbook does not allow;" },
         { "rows-damaged-no-cells-left.xlsx", ": error TD4003: the file is empty" },
         { "north-without-header-row.xlsx", ":north!A7: error TD4031: sheet 'north' has cells filled in but no header row" },
         { "sheet-without-a-name.xlsx", ":''!O1: error TD4031: sheet '' has cells filled in but no header row" },

@@ -182,7 +182,7 @@ public sealed class WorkbookRecordTests
     {
         { "a zip of other files", ZipOf("notes.txt", "plot north-1-1 looked wet"), ": error TD4030: the file is not a workbook trialc can read: it is a zip file" },
         { "an old .xls or protected workbook", [0xD0, 0xCF, 0x11, 0xE0, 0xA1, 0xB1, 0x1A, 0xE1, 0, 0, 0, 0], ":1:1: error TD4030: the file is not a workbook trialc can read: it is an old-format (.xls) or password-protected workbook" },
-        { "a cut-off download", [0x50, 0x4B, 0x03, 0x04, 0x14, 0x00, 0x00, 0x00, 0x08, 0x00], ": error TD4030: the file is not a workbook trialc can read: it is a zip file but not an .xlsx workbook" },
+        { "a cut-off download", [0x50, 0x4B, 0x03, 0x04, 0x14, 0x00, 0x00, 0x00, 0x08, 0x00], ": error TD4030: the file is not a workbook trialc can read: it is a zip archive, but damaged or incomplete, as after a download or copy that stopped early;" },
     };
 
     [Theory]
@@ -197,6 +197,35 @@ public sealed class WorkbookRecordTests
         Assert.Equal(1, run.ExitCode);
         Assert.StartsWith(path + expected, run.Error);
         Assert.Contains("CSV UTF-8", run.Error);
+        Assert.DoesNotContain("   at ", run.Error);
+    }
+
+    [Fact]
+    public void A_workbook_whose_sheet_is_cut_short_is_refused_with_where_its_xml_breaks_off()
+    {
+        using var trial = new LedgerTrial("cover-crops.trial");
+        trial.Issue(1);
+        // The issued workbook rewritten with its first worksheet's XML cut in half, the zip itself intact:
+        // what a sync tool that stopped mid-save leaves behind.
+        var issued = File.ReadAllBytes(Path.Combine(trial.OutFolder(1), trial.Stem + "-round1.xlsx"));
+        var path = trial.File("cut-sheet.xlsx");
+        using (var source = new ZipArchive(new MemoryStream(issued), ZipArchiveMode.Read))
+        using (var target = new ZipArchive(File.Create(path), ZipArchiveMode.Create))
+        {
+            foreach (var entry in source.Entries)
+            {
+                using var input = new MemoryStream();
+                using (var stream = entry.Open()) stream.CopyTo(input);
+                var bytes = input.ToArray();
+                if (entry.FullName == "xl/worksheets/sheet1.xml") bytes = bytes[..(bytes.Length / 2)];
+                using var output = target.CreateEntry(entry.FullName).Open();
+                output.Write(bytes);
+            }
+        }
+        var run = trial.Record(path);
+        Assert.Equal(1, run.ExitCode);
+        Assert.Matches(@": error TD4030: the file is not a workbook trialc can read: it is an \.xlsx workbook, but a part of it is damaged or cut short \(its XML breaks off at line \d+, position \d+\); open it in the spreadsheet and save it again", run.Error);
+        Assert.DoesNotContain("not closed", run.Error);
         Assert.DoesNotContain("   at ", run.Error);
     }
 
