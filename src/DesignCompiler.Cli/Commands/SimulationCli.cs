@@ -99,11 +99,6 @@ internal static class SimulationCli
     public static (double Margin, string Rule) Margin(CheckedDesign design, double? given) =>
         given is { } m ? (m, DefaultMargin.Given(m, design)) : DefaultMargin.For(design);
 
-    /// <summary>
-    /// Runs a simulation that Ctrl-C (or a batch scheduler's SIGTERM) stops cleanly: no new
-    /// replication starts, those running finish, and the caller reports what finished. A
-    /// progress line is drawn only when standard error is a terminal.
-    /// </summary>
     /// <summary>The --bench line: seconds, and µs per simulated round as thread time (seconds · threads / rounds).</summary>
     public static void ReportBench(CliConsole console, TimeSpan elapsed, long trials, int rounds, int threads)
     {
@@ -113,6 +108,11 @@ internal static class SimulationCli
             $"bench: {trials} trials of {rounds} rounds on {threads} thread(s) in {seconds:F3} s ({perRound:F1} us per round per thread)"));
     }
 
+    /// <summary>
+    /// Runs a simulation that Ctrl-C (or a batch scheduler's SIGTERM) stops cleanly: no new
+    /// replication starts, those running finish, and the caller reports what finished. A
+    /// progress line is drawn only when standard error is a terminal.
+    /// </summary>
     public static T RunCancellable<T>(CliConsole console, long total, Func<SimulationProgress, CancellationToken, T> run)
     {
         using var cancel = new CancellationTokenSource();
@@ -129,8 +129,9 @@ internal static class SimulationCli
         });
         var progress = new SimulationProgress(total);
         var interactive = ReferenceEquals(console.Error, Console.Error) && !Console.IsErrorRedirected;
+        var started = System.Diagnostics.Stopwatch.GetTimestamp();
         using var timer = interactive
-            ? new Timer(_ => console.Error.Write(FormattableString.Invariant($"\rsimulating: {progress.Done} of {progress.Total} trials ")), null, 500, 500)
+            ? new Timer(_ => console.Error.Write("\r" + ProgressLine.Text(progress.Done, progress.Total, System.Diagnostics.Stopwatch.GetElapsedTime(started))), null, 500, 500)
             : null;
         try
         {
@@ -140,7 +141,7 @@ internal static class SimulationCli
         {
             Console.CancelKeyPress -= onCancel;
             timer?.Dispose();
-            if (interactive) console.Error.Write("\r" + new string(' ', 60) + "\r");
+            if (interactive) console.Error.Write("\r" + new string(' ', ProgressLine.Width) + "\r");
             if (cancel.IsCancellationRequested)
                 console.Error.WriteLine(FormattableString.Invariant($"trialc: interrupted; finished {progress.Done} of {progress.Total} trials, the report covers those and says it was cut short"));
         }
