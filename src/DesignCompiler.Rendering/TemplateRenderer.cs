@@ -59,9 +59,25 @@ public static partial class TemplateRenderer
         if (!match.Success) return null;
         var word = match.Groups["name"].Value.TrimEnd('.');
         var last = word[(word.LastIndexOf('.') + 1)..];
-        return Suggestions.DidYouMean(last, ModelNames.Of(model.GetType()).Concat(TemplateFunctions.Names)) is { } hint
+        var names = ModelNames.Of(model.GetType()).Concat(TemplateFunctions.Names).ToList();
+        return (Family(last, names) ?? Suggestions.DidYouMean(last, names)) is { } hint
             ? hint + " A" + TemplateDiagnostics.RuntimeHint[1..]
             : null;
+    }
+
+    /// <summary>
+    /// The model flattens a group into snake_case names ('next' is 'next_kind', 'next_round' and 'next_text'), so a
+    /// name that is the start of some of them is better answered with those than with the nearest spelling ('text').
+    /// </summary>
+    private static string? Family(string word, IReadOnlyList<string> names)
+    {
+        var members = names.Where(n => n.StartsWith(word + "_", StringComparison.Ordinal)).Distinct().Order(StringComparer.Ordinal).ToList();
+        return members.Count switch
+        {
+            0 => null,
+            1 => $"did you mean '{members[0]}'?",
+            _ => "did you mean one of " + string.Join(", ", members.Take(6).Select(m => $"'{m}'")) + (members.Count > 6 ? ", …" : "") + "?",
+        };
     }
 
     /// <summary>Scriban names a missing variable in backquotes, a missing member after "with name".</summary>
