@@ -1,3 +1,5 @@
+using System.Runtime.Intrinsics;
+
 namespace DesignCompiler.Numerics.Multivariate;
 
 /// <summary>
@@ -81,14 +83,55 @@ internal sealed class LatticeRun
     private double Rounding => RoundingFloor + PointsPerShift * 2.220446049250313e-16;
 
     /// <summary>Continues every shift's sequence up to <paramref name="target"/> points.</summary>
-    public void ExtendTo(long target)
+    public void ExtendTo(long target) => ExtendTo(target, Vector512.IsHardwareAccelerated);
+
+    /// <summary>
+    /// As <see cref="ExtendTo(long)"/>; <paramref name="inLanes"/> evaluates the points eight at a time
+    /// (<see cref="SeparatedProblem.EvaluateLanes"/>), which gives the same bits, and is there so tests can say so.
+    /// </summary>
+    internal void ExtendTo(long target, bool inLanes)
     {
         if (points is null || target <= PointsPerShift) return;
         Span<double> w = point;
+        const int lanes = SeparatedProblem.Lanes;
+        int coordinates = point.Length - (chi is null ? 0 : 1);
+        Span<double> laneW = inLanes ? stackalloc double[coordinates * lanes] : [];
+        Span<double> scales = stackalloc double[lanes];
+        Span<double> weights = stackalloc double[lanes];
+        Span<double> values = stackalloc double[lanes];
+        Span<double> moments = stackalloc double[lanes];
+        Span<Vector512<double>> laneY = inLanes ? stackalloc Vector512<double>[y.Length] : [];
         for (int q = 0; q < probabilitySums.Length; q++)
         {
             double probabilitySum = probabilitySums[q], momentSum = momentSums[q];
-            for (long n = PointsPerShift; n < target; n++)
+            long n = PointsPerShift;
+            for (; inLanes && target - n >= lanes; n += lanes)
+            {
+                for (int i = 0; i < lanes; i++)
+                {
+                    points.Fill(q, n + i, w);
+                    double scale = 1.0, weight = 1.0;
+                    ReadOnlySpan<double> rest = w;
+                    if (chi is not null)
+                    {
+                        chi.Map(w[0], out scale, out weight);
+                        rest = w[1..];
+                    }
+                    scales[i] = scale;
+                    weights[i] = weight;
+                    for (int c = 0; c < coordinates; c++) laneW[c * lanes + i] = rest[c];
+                }
+                problem.EvaluateLanes(laneW, laneY, Vector512.Create((ReadOnlySpan<double>)scales), out var p, out var moment);
+                p.CopyTo(values);
+                moment.CopyTo(moments);
+                // Summed point by point, in the order the scalar loop sums them.
+                for (int i = 0; i < lanes; i++)
+                {
+                    probabilitySum += weights[i] * values[i];
+                    momentSum += weights[i] * moments[i] / scales[i];
+                }
+            }
+            for (; n < target; n++)
             {
                 points.Fill(q, n, w);
                 double scale = 1.0, weight = 1.0;

@@ -11,7 +11,7 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// fit_normal_quantile.py (mpmath, Chebyshev interpolation at 40 digits; each series cut where its coefficients
 /// fall below 2e-18, or 1e-17 · max(1, z) for the quantile). The scripts print exactly the numbers below.
 /// </remarks>
-internal static class NormalTail
+internal static partial class NormalTail
 {
     private const double Shift = 4.0;
 

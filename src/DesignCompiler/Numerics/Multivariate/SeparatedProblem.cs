@@ -12,7 +12,7 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// independent rest), so that E[θ · 1{lower ≤ X ≤ upper}] comes out of the same points as the probability.
 /// Immutable after construction: several threads may evaluate one problem.
 /// </remarks>
-internal sealed class SeparatedProblem
+internal sealed partial class SeparatedProblem
 {
     internal SeparatedProblem(int rank, int[] columnRowStart, double[][] coefficients, double[] lower, double[] upper, double[]? moment)
     {

@@ -5,7 +5,7 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// with a given share u of that mass below it. Both are formed from the tail on the side away from the
 /// centre, so an interval far out keeps its relative accuracy (it often is far out for an arm far behind).
 /// </summary>
-internal static class TruncatedNormal
+internal static partial class TruncatedNormal
 {
     /// <summary>P(lower &lt; Z &lt; upper) and the z in [lower, upper] with P(lower &lt; Z &lt; z) = u · that.</summary>
     public static double Sample(double lower, double upper, double u, out double z)
