@@ -37,6 +37,23 @@ internal sealed class ChiScale
     private readonly double logisticScale;
     private readonly double logConstant;
 
+    /// <summary>Tables already built, by degrees of freedom; a simulation meets the same few ν in every trial.</summary>
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<double, ChiScale> Built = new();
+
+    /// <summary>Enough for every ν of a long trial's rounds and designs side by side; past it, tables are built and not kept.</summary>
+    private const int MaxKept = 256;
+
+    /// <summary>
+    /// The chi variable for ν, shared: a table is 24 pieces of 16 exact gamma quantiles, which cost more than
+    /// the lattice points of a small problem. A shared one is immutable and gives the bits a new one would.
+    /// </summary>
+    public static ChiScale For(double degreesOfFreedom)
+    {
+        if (Built.TryGetValue(degreesOfFreedom, out var kept)) return kept;
+        var built = new ChiScale(degreesOfFreedom);
+        return Built.Count < MaxKept ? Built.GetOrAdd(degreesOfFreedom, built) : built;
+    }
+
     public ChiScale(double degreesOfFreedom)
     {
         halfDf = 0.5 * degreesOfFreedom;

@@ -67,7 +67,7 @@ public static class CorrelatedBestArm
             }
             problems[a] = BestArmOrthant.Build(location, scale, arm, rivals, withMoments);
         }
-        var chi = problems.Any(p => LatticeRun.NeedsChi(p, degreesOfFreedom)) ? new ChiScale(degreesOfFreedom) : null;
+        var chi = problems.Any(p => LatticeRun.NeedsChi(p, degreesOfFreedom)) ? ChiScale.For(degreesOfFreedom) : null;
         var runs = problems.Select(p => new LatticeRun(p, degreesOfFreedom, chi, settings)).ToArray();
 
         long n = settings.FirstPointsPerShift;

@@ -40,7 +40,7 @@ public static class RectangleProbability
             b[j] = upper[j] - location[j];
         }
         var problem = PrioritisedCholesky.Factor(scale, a, b, []);
-        var chi = LatticeRun.NeedsChi(problem, degreesOfFreedom) ? new ChiScale(degreesOfFreedom) : null;
+        var chi = LatticeRun.NeedsChi(problem, degreesOfFreedom) ? ChiScale.For(degreesOfFreedom) : null;
         var run = new LatticeRun(problem, degreesOfFreedom, chi, settings);
         Refine(run, settings);
         double error = run.ProbabilityError;

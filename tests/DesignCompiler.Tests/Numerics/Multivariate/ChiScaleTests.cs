@@ -61,4 +61,24 @@ public class ChiScaleTests
             NumericAssert.Relative(exact, s, 1e-9, $"s at w = {w}");
         }
     }
+
+    // The shared table for a ν is the table a new one would build, bit for bit, and is built once.
+    [Theory]
+    [InlineData(0.3)]
+    [InlineData(7.5)]
+    [InlineData(1e8)]
+    public void SharedTablesMapAsNewOnes(double nu)
+    {
+        var shared = ChiScale.For(nu);
+        Assert.Same(shared, ChiScale.For(nu));
+        var fresh = new ChiScale(nu);
+        for (int i = 0; i <= 1000; i++)
+        {
+            double w = i / 1000.0;
+            shared.Map(w, out var s1, out var g1);
+            fresh.Map(w, out var s2, out var g2);
+            Assert.Equal(BitConverter.DoubleToInt64Bits(s2), BitConverter.DoubleToInt64Bits(s1));
+            Assert.Equal(BitConverter.DoubleToInt64Bits(g2), BitConverter.DoubleToInt64Bits(g1));
+        }
+    }
 }
