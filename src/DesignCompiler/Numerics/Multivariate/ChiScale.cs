@@ -24,7 +24,7 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// ν from 0.3 to 1e8), but it is less smooth near w = 0 than the inverse, which costs the lattice rule a factor of
 /// 2–4 in error at moderate ν; at ν &gt; 1e7 the weight is within 13 % of 1 and smooth.</para>
 /// </remarks>
-internal sealed class ChiScale
+internal sealed partial class ChiScale
 {
     private const double TabulatedMin = 0.5;
     private const double TabulatedMax = 1e7;
@@ -60,6 +60,7 @@ internal sealed class ChiScale
         if (degreesOfFreedom >= TabulatedMin && degreesOfFreedom <= TabulatedMax)
         {
             pieces = Tabulate(degreesOfFreedom);
+            termsByLane = TermsByLane(pieces);
             return;
         }
         logisticScale = degreesOfFreedom >= 4 ? 0.5 / Math.Sqrt(degreesOfFreedom) : 1.0 / degreesOfFreedom;

@@ -96,6 +96,7 @@ internal sealed class LatticeRun
         const int lanes = SeparatedProblem.Lanes;
         int coordinates = point.Length - (chi is null ? 0 : 1);
         Span<double> laneW = inLanes ? stackalloc double[coordinates * lanes] : [];
+        Span<double> chiW = stackalloc double[lanes];
         Span<double> scales = stackalloc double[lanes];
         Span<double> weights = stackalloc double[lanes];
         Span<double> values = stackalloc double[lanes];
@@ -107,19 +108,21 @@ internal sealed class LatticeRun
             long n = PointsPerShift;
             for (; inLanes && target - n >= lanes; n += lanes)
             {
+                int first = chi is null ? 0 : 1;
                 for (int i = 0; i < lanes; i++)
                 {
                     points.Fill(q, n + i, w);
-                    double scale = 1.0, weight = 1.0;
-                    ReadOnlySpan<double> rest = w;
-                    if (chi is not null)
-                    {
-                        chi.Map(w[0], out scale, out weight);
-                        rest = w[1..];
-                    }
-                    scales[i] = scale;
-                    weights[i] = weight;
-                    for (int c = 0; c < coordinates; c++) laneW[c * lanes + i] = rest[c];
+                    if (chi is not null) chiW[i] = w[0];
+                    for (int c = 0; c < coordinates; c++) laneW[c * lanes + i] = w[first + c];
+                }
+                if (chi is not null)
+                {
+                    chi.MapLanes(chiW, scales, weights);
+                }
+                else
+                {
+                    scales.Fill(1.0);
+                    weights.Fill(1.0);
                 }
                 problem.EvaluateLanes(laneW, laneY, Vector512.Create((ReadOnlySpan<double>)scales), out var p, out var moment);
                 p.CopyTo(values);

@@ -81,4 +81,32 @@ public class ChiScaleTests
             Assert.Equal(BitConverter.DoubleToInt64Bits(g2), BitConverter.DoubleToInt64Bits(g1));
         }
     }
+
+    // Eight points at once map exactly as one at a time: the table's pieces, the ends of (0, 1) and the
+    // logistic map outside the table (ν below 0.5 or above 1e7).
+    [Theory]
+    [InlineData(0.3)]
+    [InlineData(0.5)]
+    [InlineData(7.5)]
+    [InlineData(250.0)]
+    [InlineData(1e7)]
+    [InlineData(1e8)]
+    public void EightAtOnceMapAsOneAtATime(double nu)
+    {
+        var chi = new ChiScale(nu);
+        var random = new Random(17);
+        Span<double> w = stackalloc double[8], scale = stackalloc double[8], weight = stackalloc double[8];
+        double[] ends = [0.0, 1e-300, RichtmyerPoints.Epsilon, 1e-12, 0.5, 1 - 1e-12, 1 - RichtmyerPoints.Epsilon, 1.0];
+        for (int round = 0; round < 2000; round++)
+        {
+            for (int i = 0; i < 8; i++) w[i] = round == 0 ? ends[i] : random.NextDouble();
+            chi.MapLanes(w, scale, weight);
+            for (int i = 0; i < 8; i++)
+            {
+                chi.Map(w[i], out var s1, out var g1);
+                Assert.Equal(BitConverter.DoubleToInt64Bits(s1), BitConverter.DoubleToInt64Bits(scale[i]));
+                Assert.Equal(BitConverter.DoubleToInt64Bits(g1), BitConverter.DoubleToInt64Bits(weight[i]));
+            }
+        }
+    }
 }
