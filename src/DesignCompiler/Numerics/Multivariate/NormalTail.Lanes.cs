@@ -27,9 +27,13 @@ internal static partial class NormalTail
 
     /// <summary><see cref="Upper"/> for z ≥ 0 (or NaN) in every lane.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal static Vector512<double> UpperLanes(Vector512<double> z)
+    internal static Vector512<double> UpperLanes(Vector512<double> z) => UpperLanes(z, out _);
+
+    /// <summary><see cref="UpperLanes(Vector512{double})"/>, and φ(z) on the way (the scalar <see cref="StandardNormal.Pdf"/>'s bits).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static Vector512<double> UpperLanes(Vector512<double> z, out Vector512<double> density)
     {
-        var density = PdfLanes(z);
+        density = PdfLanes(z);
         var u = Vector512.Create(Shift) / (z + Vector512.Create(Shift));
         // The scalar branches: u <= 1/4 is piece 0, … , anything else (NaN too) piece 3.
         var piece = Vector512.Create(3L)

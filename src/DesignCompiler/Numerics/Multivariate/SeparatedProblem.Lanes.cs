@@ -40,14 +40,14 @@ internal sealed partial class SeparatedProblem
         }
         IntervalLanes(last, y, scale, out var lo, out var hi);
         alive &= Vector512.LessThan(lo, hi);
-        var mass = TruncatedNormal.BetweenLanes(lo, hi);
+        var mass = TruncatedNormal.BetweenLanes(lo, hi, out var densityLo, out var densityHi);
         value = Vector512.ConditionalSelect(alive, f * mass, Vector512<double>.Zero);
         moment = Vector512<double>.Zero;
         if (Moment is double[] m)
         {
             var known = Vector512<double>.Zero;
             for (int c = 0; c < last; c++) known = Vector512.FusedMultiplyAdd(Vector512.Create(m[c]), y[c], known);
-            var edge = NormalTail.PdfLanes(lo) - NormalTail.PdfLanes(hi);
+            var edge = densityLo - densityHi;
             moment = Vector512.ConditionalSelect(alive, f * (known * mass + Vector512.Create(m[last]) * edge), Vector512<double>.Zero);
         }
     }

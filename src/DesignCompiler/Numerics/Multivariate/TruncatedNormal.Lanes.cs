@@ -37,17 +37,24 @@ internal static partial class TruncatedNormal
         return mass;
     }
 
-    /// <summary><see cref="NormalTail.Between"/> for lanes with lower &lt; upper.</summary>
+    /// <summary>
+    /// <see cref="NormalTail.Between"/> for lanes with lower &lt; upper, and φ at both limits, which the tails
+    /// compute on the way (φ is even bit for bit: it depends on z only through z², and z · z = (−z) · (−z)).
+    /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static Vector512<double> BetweenLanes(Vector512<double> lower, Vector512<double> upper)
+    public static Vector512<double> BetweenLanes(Vector512<double> lower, Vector512<double> upper,
+        out Vector512<double> densityLower, out Vector512<double> densityUpper)
     {
         var right = Vector512.GreaterThanOrEqual(lower, Vector512<double>.Zero);
         var left = ~right & Vector512.LessThanOrEqual(upper, Vector512<double>.Zero);
         var straddle = ~right & ~left;
         // lower >= 0: Upper(lower) − Upper(upper); upper <= 0: Upper(−upper) − Upper(−lower);
         // otherwise 1 − Upper(upper) − Upper(−lower).
-        var first = NormalTail.UpperLanes(Vector512.ConditionalSelect(right, lower, Vector512.ConditionalSelect(left, -upper, upper)));
-        var second = NormalTail.UpperLanes(Vector512.ConditionalSelect(right, upper, -lower));
+        var first = NormalTail.UpperLanes(Vector512.ConditionalSelect(right, lower, Vector512.ConditionalSelect(left, -upper, upper)), out var firstDensity);
+        var second = NormalTail.UpperLanes(Vector512.ConditionalSelect(right, upper, -lower), out var secondDensity);
+        // The first tail is at the lower limit only when lower >= 0; otherwise at ±upper.
+        densityLower = Vector512.ConditionalSelect(right, firstDensity, secondDensity);
+        densityUpper = Vector512.ConditionalSelect(right, secondDensity, firstDensity);
         return Vector512.ConditionalSelect(straddle, Vector512.Create(1.0) - first - second, first - second);
     }
 }
