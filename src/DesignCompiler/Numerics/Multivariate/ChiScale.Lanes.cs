@@ -7,7 +7,7 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// <summary>
 /// <see cref="Map"/> for the eight points of a register. The tabulated inverse runs in lanes: each lane finds its
 /// piece and runs that piece's Clenshaw recurrence, the steps of the scalar map in the same order, with the
-/// library's log and exp lane by lane, so scale and weight are the scalar ones bit for bit. The rarely used
+/// repeatable log and exp in lanes, so scale and weight are the scalar ones bit for bit. The rarely used
 /// logistic map (ν outside the table) is the scalar map lane by lane.
 /// </summary>
 internal sealed partial class ChiScale
@@ -35,14 +35,10 @@ internal sealed partial class ChiScale
         var lowest = Vector512.Create(RichtmyerPoints.Epsilon);
         var highest = Vector512.Create(1.0 - RichtmyerPoints.Epsilon);
         var v = Vector512.Create(w[..Lanes]);
-        // Math.Clamp(w, ε, 1 − ε), then t = ln(w / (1 − w)) by the library's log.
+        // Math.Clamp(w, ε, 1 − ε), then t = ln(w / (1 − w)) by the repeatable log.
         v = Vector512.ConditionalSelect(Vector512.LessThan(v, lowest), lowest,
             Vector512.ConditionalSelect(Vector512.GreaterThan(v, highest), highest, v));
-        var ratio = v / (Vector512.Create(1.0) - v);
-        Span<double> lanes = stackalloc double[Lanes];
-        ratio.CopyTo(lanes);
-        for (int i = 0; i < Lanes; i++) lanes[i] = Math.Log(lanes[i]);
-        var t = Vector512.Create((ReadOnlySpan<double>)lanes);
+        var t = RepeatableMath.Log(v / (Vector512.Create(1.0) - v));
         var reach = Vector512.Create(Reach);
         t = Vector512.ConditionalSelect(Vector512.LessThan(t, -reach), -reach,
             Vector512.ConditionalSelect(Vector512.GreaterThan(t, reach), reach, t));
@@ -62,8 +58,7 @@ internal sealed partial class ChiScale
             b1 = b0;
         }
         var u = Vector512.FusedMultiplyAdd(x, b1, Term(terms[0], index, high) - b2);
-        u.CopyTo(lanes);
-        for (int i = 0; i < Lanes; i++) scale[i] = Math.Exp(lanes[i]);
+        RepeatableMath.Exp(u).CopyTo(scale);
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

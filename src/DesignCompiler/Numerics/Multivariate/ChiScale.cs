@@ -81,15 +81,17 @@ internal sealed partial class ChiScale
     {
         w = Math.Clamp(w, RichtmyerPoints.Epsilon, 1.0 - RichtmyerPoints.Epsilon);
         double oneMinusW = 1.0 - w;
-        double t = Math.Log(w / oneMinusW);
         if (pieces is not null)
         {
-            double position = (Math.Clamp(t, -Reach, Reach) + Reach) / (2 * Reach) * Pieces;
+            // The repeatable log and exp: their lane forms (MapLanes) have the same bits.
+            double logit = RepeatableMath.Log(w / oneMinusW);
+            double position = (Math.Clamp(logit, -Reach, Reach) + Reach) / (2 * Reach) * Pieces;
             int piece = Math.Min((int)position, Pieces - 1);
-            scale = Math.Exp(Clenshaw(pieces[piece], 2.0 * (position - piece) - 1.0));
+            scale = RepeatableMath.Exp(Clenshaw(pieces[piece], 2.0 * (position - piece) - 1.0));
             weight = 1.0;
             return;
         }
+        double t = Math.Log(w / oneMinusW);
         double u = logisticScale * t;
         scale = Math.Exp(u);
         // a (e^{2u} − 1 − 2u), with e^{2u} − 1 from expm1 so that large ν (tiny u) does not cancel.

@@ -7,8 +7,9 @@ namespace DesignCompiler.Numerics.Multivariate;
 /// <summary>
 /// The tail and its quantile at eight arguments at once, for eight lattice points evaluated side by side. Each
 /// lane runs exactly the scalar steps: the same piece, the same Clenshaw recurrence (a shorter series padded
-/// with zeros at its top, where the recurrence stays at +0 until its first real term), and the library's own
-/// exp and log called lane by lane, so every lane is bit for bit the scalar value.
+/// with zeros at its top, where the recurrence stays at +0 until its first real term), and the repeatable
+/// exp and log (<see cref="RepeatableMath"/>), whose lane forms have the scalar bits, so every lane is bit for
+/// bit the scalar value.
 /// </summary>
 internal static partial class NormalTail
 {
@@ -33,7 +34,7 @@ internal static partial class NormalTail
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static Vector512<double> UpperLanes(Vector512<double> z, out Vector512<double> density)
     {
-        density = PdfLanes(z);
+        density = DensityLanes(z);
         var u = Vector512.Create(Shift) / (z + Vector512.Create(Shift));
         // The scalar branches: u <= 1/4 is piece 0, … , anything else (NaN too) piece 3.
         var piece = Vector512.Create(3L)
@@ -49,7 +50,7 @@ internal static partial class NormalTail
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     internal static Vector512<double> UpperQuantileLanes(Vector512<double> q)
     {
-        var t = Vector512.Sqrt(Vector512.Create(-2.0) * LogLanes(q));
+        var t = Vector512.Sqrt(Vector512.Create(-2.0) * RepeatableMath.Log(q));
         var piece = Vector512.Create(7L);
         for (int k = 0; k < 7; k++)
             piece += Vector512.LessThanOrEqual(t, Vector512.Create(QuantileTo[k])).AsInt64();
@@ -84,24 +85,14 @@ internal static partial class NormalTail
         return Vector512.FusedMultiplyAdd(x, b1, Avx512F.PermuteVar8x64(terms[0], piece) - b2);
     }
 
-    /// <summary><see cref="StandardNormal.Pdf"/> lane by lane: its bits are the scalar call's.</summary>
+    /// <summary><see cref="Density"/> in every lane.</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    internal static Vector512<double> PdfLanes(Vector512<double> x)
+    internal static Vector512<double> DensityLanes(Vector512<double> z)
     {
-        Span<double> lanes = stackalloc double[Lanes];
-        x.CopyTo(lanes);
-        for (int i = 0; i < Lanes; i++) lanes[i] = StandardNormal.Pdf(lanes[i]);
-        return Vector512.Create((ReadOnlySpan<double>)lanes);
-    }
-
-    /// <summary>The library's <see cref="Math.Log"/> lane by lane.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    private static Vector512<double> LogLanes(Vector512<double> x)
-    {
-        Span<double> lanes = stackalloc double[Lanes];
-        x.CopyTo(lanes);
-        for (int i = 0; i < Lanes; i++) lanes[i] = Math.Log(lanes[i]);
-        return Vector512.Create((ReadOnlySpan<double>)lanes);
+        var hi = z * z;
+        var lo = Vector512.FusedMultiplyAdd(z, z, -hi);
+        var value = Vector512.Create(InvSqrtTwoPi) * (RepeatableMath.Exp(Vector512.Create(-0.5) * hi) * (Vector512.Create(1.0) - Vector512.Create(0.5) * lo));
+        return Vector512.ConditionalSelect(Vector512.Equals(hi, Vector512.Create(double.PositiveInfinity)), Vector512<double>.Zero, value);
     }
 
     /// <summary>Term j of every piece in one register, piece p in lane p; a piece's missing top terms are 0.</summary>

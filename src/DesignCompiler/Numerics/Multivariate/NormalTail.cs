@@ -28,7 +28,22 @@ internal static partial class NormalTail
         if (double.IsNaN(z)) return z;
         if (z < 0) return 1.0 - Upper(-z);
         if (z > Underflow) return 0.0;
-        return UpperGivenDensity(z, StandardNormal.Pdf(z));
+        return UpperGivenDensity(z, Density(z));
+    }
+
+    private const double InvSqrtTwoPi = 0.39894228040143267793994605993438;
+
+    /// <summary>
+    /// φ(z) as <see cref="StandardNormal.Pdf"/> forms it (e^(−z²/2) with z² split into its rounded value and the
+    /// rounding error), but with <see cref="RepeatableMath.Exp(double)"/>, which has a lane form with the same bits:
+    /// the lattice rules evaluate eight points at once and need every lane to be the scalar value.
+    /// </summary>
+    internal static double Density(double z)
+    {
+        double hi = z * z;
+        if (double.IsInfinity(hi)) return 0.0;
+        double lo = Math.FusedMultiplyAdd(z, z, -hi);
+        return InvSqrtTwoPi * (RepeatableMath.Exp(-0.5 * hi) * (1.0 - 0.5 * lo));
     }
 
     /// <summary><see cref="Upper"/> for z ≥ 0 when φ(z) is already known (exactly <see cref="StandardNormal.Pdf"/>'s value).</summary>
@@ -61,7 +76,7 @@ internal static partial class NormalTail
     {
         if (!(q > 0)) return double.PositiveInfinity;
         if (q >= 0.5) return 0.0;
-        double t = Math.Sqrt(-2.0 * Math.Log(q));
+        double t = Math.Sqrt(-2.0 * RepeatableMath.Log(q));
         if (t <= 2.0) return Math.Max(Chebyshev(Quantile0, t, CentreT, 2.0), 0.0);
         if (t <= 3.0) return Chebyshev(Quantile1, t, 2.0, 3.0);
         if (t <= 4.5) return Chebyshev(Quantile2, t, 3.0, 4.5);

@@ -94,7 +94,7 @@ internal sealed partial class SeparatedProblem
             // E[y_last · 1{interval}] = φ(lo) − φ(hi) exactly, so the last column needs no point of its own.
             double known = 0;
             for (int c = 0; c < last; c++) known = Math.FusedMultiplyAdd(m[c], y[c], known);
-            moment = f * (known * mass + m[last] * (StandardNormal.Pdf(lo) - StandardNormal.Pdf(hi)));
+            moment = f * (known * mass + m[last] * (NormalTail.Density(lo) - NormalTail.Density(hi)));
         }
         return f * mass;
     }
