@@ -24,14 +24,14 @@ trap 'rm -rf "$work"' EXIT
 
 # The flags RESULTS.md uses.
 gcc -O2 -march=native -fopenmp -Wall -Wextra -o "$work/thompson_sim" "$ref/thompson_sim.c" -lm
-# trialc as README "Installing" has it: published for this platform, so precompiled (ReadyToRun).
+# trialc as README "Installing" has it: published for this machine, one precompiled image, no tiering.
 # TRIALC_BUILD=plain measures the plain Release build instead (compiled on first use).
 rid=$(dotnet --info | sed -n 's/^ *RID: *//p' | head -n 1)
 if [ "${TRIALC_BUILD:-publish}" = plain ]; then
   dotnet build "$root/src/DesignCompiler.Cli" -c Release -v quiet -nologo > "$work/build.log"
   trialc="$root/src/DesignCompiler.Cli/bin/Release/net10.0/trialc"
 else
-  dotnet publish "$root/src/DesignCompiler.Cli" -c Release -r "$rid" --self-contained false -o "$work/trialc" -v quiet -nologo > "$work/build.log"
+  dotnet publish "$root/src/DesignCompiler.Cli" -c Release -r "$rid" -o "$work/trialc" -v quiet -nologo > "$work/build.log"
   trialc="$work/trialc/trialc"
 fi
 dotnet build "$root/tests/DesignCompiler.Benchmarks" -c Release -v quiet -nologo >> "$work/build.log"
