@@ -25,8 +25,8 @@ internal readonly partial struct GammaKernel
             return;
         }
         Span<double> prefactor = stackalloc double[n], seriesAt = stackalloc double[n], fractionAt = stackalloc double[n], values = stackalloc double[n];
-        Span<int> seriesIndex = stackalloc int[n], fractionIndex = stackalloc int[n];
-        int series = 0, fractions = 0;
+        Span<int> seriesIndex = stackalloc int[n], fractionIndex = stackalloc int[n], pending = stackalloc int[n];
+        int series = 0, fractions = 0, count = 0;
         for (int j = 0; j < n; j++)
         {
             double v = x[j];
@@ -35,8 +35,22 @@ internal readonly partial struct GammaKernel
                 Evaluate(v, out density[j], out lower[j], out upper[j]);
                 continue;
             }
-            prefactor[j] = Math.Exp(LogPrefactor(v));
-            density[j] = prefactor[j] / v;
+            pending[count++] = j;
+        }
+        // A uniform kernel's points get their prefactors in lanes and keep for the series and the continued
+        // fraction only those outside the expansion's domain; other kernels' points all go there.
+        if (uniform) count = UniformMany(x, pending[..count], prefactor, density, lower, upper);
+        else
+        {
+            foreach (int j in pending[..count])
+            {
+                prefactor[j] = RepeatableMath.Exp(LogPrefactor(x[j]));
+                density[j] = prefactor[j] / x[j];
+            }
+        }
+        foreach (int j in pending[..count])
+        {
+            double v = x[j];
             if (v < A + 1.0)
             {
                 seriesIndex[series] = j;
@@ -62,6 +76,45 @@ internal readonly partial struct GammaKernel
             upper[j] = Math.Min(1.0, prefactor[j] * values[i]);
             lower[j] = 1.0 - upper[j];
         }
+    }
+
+    // The points of a uniform kernel in groups of eight (a short group padded with its last point): each gets its
+    // prefactor and density, and its tails where the expansion holds. The others are moved to the front of
+    // points, in order, for the series or the continued fraction (with the prefactor found here, which is the
+    // scalar one bit for bit); returns how many.
+    [SkipLocalsInit]
+    private int UniformMany(ReadOnlySpan<double> x, Span<int> points, Span<double> prefactor, Span<double> density,
+        Span<double> lower, Span<double> upper)
+    {
+        Span<double> lanes = stackalloc double[Lanes], f = stackalloc double[Lanes], d = stackalloc double[Lanes],
+            lo = stackalloc double[Lanes], up = stackalloc double[Lanes], ok = stackalloc double[Lanes];
+        int outside = 0;
+        for (int done = 0; done < points.Length; done += Lanes)
+        {
+            int count = Math.Min(Lanes, points.Length - done);
+            for (int i = 0; i < Lanes; i++) lanes[i] = x[points[done + Math.Min(i, count - 1)]];
+            UniformLanes(Vector512.Create((ReadOnlySpan<double>)lanes), out var dv, out var lv, out var uv, out var inside).CopyTo(f);
+            dv.CopyTo(d);
+            lv.CopyTo(lo);
+            uv.CopyTo(up);
+            inside.CopyTo(ok);
+            for (int i = 0; i < count; i++)
+            {
+                int j = points[done + i];
+                prefactor[j] = f[i];
+                density[j] = d[i];
+                if (BitConverter.DoubleToInt64Bits(ok[i]) != 0)
+                {
+                    lower[j] = lo[i];
+                    upper[j] = up[i];
+                }
+                else
+                {
+                    points[outside++] = j; // never ahead of the group being read
+                }
+            }
+        }
+        return outside;
     }
 
     // LowerSeries and UpperContinuedFraction at every point: groups of eight in lanes, a group short of eight padded

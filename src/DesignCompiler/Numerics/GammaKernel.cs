@@ -12,6 +12,10 @@ internal readonly partial struct GammaKernel
     private readonly bool centred;
     private readonly double logConstant;
 
+    // For shapes from UniformMinimumShape on (GammaKernel.Uniform.cs): 1/a, Γ*(a)/a and √a.
+    private readonly bool uniform;
+    private readonly double inverseShape, uniformScale, sqrtShape;
+
     public GammaKernel(double a)
     {
         A = a;
@@ -19,20 +23,24 @@ internal readonly partial struct GammaKernel
         logConstant = centred
             ? 0.5 * Math.Log(a) - SpecialFunctions.HalfLogTwoPi - StirlingSeries.Correction(a)
             : -SpecialFunctions.LogGamma(a);
+        uniform = a >= UniformMinimumShape && !double.IsPositiveInfinity(a);
+        inverseShape = 1.0 / a;
+        uniformScale = uniform ? RepeatableMath.Exp(StirlingSeries.Correction(a)) / a : 0.0;
+        sqrtShape = Math.Sqrt(a);
     }
 
     public double A { get; }
 
+    // The logarithms are the repeatable ones, whose lane forms have the same bits (GammaKernel.Lanes.cs).
     public double LogPrefactor(double x)
     {
-        if (centred)
-        {
-            double t = (x - A) / A;
-            double l = Math.Abs(t) <= 0.5 ? SpecialFunctions.Log1pMinusX(t) : Math.Log(x / A) - t;
-            return A * l + logConstant;
-        }
-        return A * Math.Log(x) - x + logConstant;
+        if (centred) return A * CentredLog(x, (x - A) / A) + logConstant;
+        return A * RepeatableMath.Log(x) - x + logConstant;
     }
+
+    /// <summary>ln(x/a) − (x − a)/a, given t = (x − a)/a.</summary>
+    private double CentredLog(double x, double t) =>
+        Math.Abs(t) <= 0.5 ? SpecialFunctions.Log1pMinusX(t) : RepeatableMath.Log(x / A) - t;
 
     /// <summary>ln of the density x^(a−1) e^(−x) / Γ(a).</summary>
     public double LogDensity(double x) => LogPrefactor(x) - Math.Log(x);
@@ -45,8 +53,9 @@ internal readonly partial struct GammaKernel
     {
         if (!(x > 0)) { density = 0; lower = 0; upper = 1; return; }
         if (double.IsPositiveInfinity(x)) { density = 0; lower = 1; upper = 0; return; }
-        double prefactor = Math.Exp(LogPrefactor(x));
+        double prefactor = RepeatableMath.Exp(LogPrefactor(x));
         density = prefactor / x;
+        if (uniform && TryUniformTails(x, prefactor, out lower, out upper)) return;
         if (x < A + 1.0)
         {
             lower = Math.Min(1.0, prefactor * LowerSeries(A, x));

@@ -105,6 +105,20 @@ public class PanelEvaluationTests
         AssertManyPointsAreTheOnePointValues(marginal, x);
     }
 
+    [Theory]
+    [InlineData(50.0)]       // the smallest shape that takes the uniform expansion
+    [InlineData(64.5)]
+    [InlineData(1e5)]
+    public void GammaPanelsAcrossTheUniformExpansionsEdgeAreBitForBit(double shape)
+    {
+        // From shape 50 on, points with |eta| <= 0.8 (x/a between about 0.40 and 2.0) take the expansion in lanes
+        // and the others the series or the continued fraction: groups of eight that straddle either edge must
+        // still give every point its one-point value.
+        var marginal = new GammaMarginal(shape, 1.0);
+        var x = Enumerable.Range(0, 41).Select(i => shape * (0.3 + 1.9 * i / 40.0)).ToArray();
+        AssertManyPointsAreTheOnePointValues(marginal, x);
+    }
+
     // EvaluateMany against Evaluate at every point, bit for bit; returns the CDFs.
     private static double[] AssertManyPointsAreTheOnePointValues(IQuadratureProfile marginal, double[] x)
     {
