@@ -119,6 +119,19 @@ public class PanelEvaluationTests
         AssertManyPointsAreTheOnePointValues(marginal, x);
     }
 
+    [Theory]
+    [InlineData(0.0, 1.0)]
+    [InlineData(5.2, 0.04)]
+    [InlineData(-1e3, 250.0)]
+    public void NormalPanelsAreBitForBitTheOnePointValues(double mean, double sd)
+    {
+        // A normal arm's points run in lanes: both sides of the mean (the tail taken beyond |z|), the mean itself,
+        // the far tails where the Chebyshev pieces change and past underflow, and a group short of eight.
+        var marginal = new NormalMarginal(mean, sd);
+        var z = new[] { -40.0, -37.0, -12.0, -4.0, -1.0, -0.25, -1e-9, 0.0, 1e-9, 0.25, 1.0, 2.5, 4.0, 8.0, 12.0, 20.0, 37.0, 38.0, double.PositiveInfinity };
+        AssertManyPointsAreTheOnePointValues(marginal, z.Select(v => mean + v * sd).ToArray());
+    }
+
     // EvaluateMany against Evaluate at every point, bit for bit; returns the CDFs.
     private static double[] AssertManyPointsAreTheOnePointValues(IQuadratureProfile marginal, double[] x)
     {
