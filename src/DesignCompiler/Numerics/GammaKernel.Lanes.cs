@@ -4,10 +4,10 @@ using System.Runtime.Intrinsics;
 namespace DesignCompiler.Numerics;
 
 /// <summary>
-/// <see cref="Evaluate"/> at many points at once, as the P(best) quadrature asks for a panel: the series and the
-/// continued fraction, the costly parts, run eight points to an AVX-512 register. Every lane takes exactly the
-/// scalar steps and keeps its value from the step at which it converged, so each result is bit for bit the
-/// one-point value whatever the other lanes do.
+/// <see cref="Evaluate"/> at many points at once, as the P(best) quadrature asks for a panel: the uniform expansion
+/// of large shapes (GammaKernel.Uniform.cs), the series and the continued fraction, the costly parts, run eight
+/// points to an AVX-512 register. Every lane takes exactly the scalar steps and keeps its value from the step at
+/// which it converged, so each result is bit for bit the one-point value whatever the other lanes do.
 /// </summary>
 internal readonly partial struct GammaKernel
 {
