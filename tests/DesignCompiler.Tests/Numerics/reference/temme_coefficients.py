@@ -13,7 +13,7 @@ cancel, which they do only if the recurrence and the g_k are right.
 
 Run: python3 temme_coefficients.py        prints the C# table for src/DesignCompiler/Numerics/TemmeGamma.Table.cs
      python3 temme_coefficients.py check  compares the expansion, evaluated in mpmath, with mpmath.gammainc
-     python3 temme_coefficients.py cases  prints the test cases of IncompleteGammaTests.UniformExpansionMatchesMpmath
+     python3 temme_coefficients.py cases > temme_cases.csv   the cases of IncompleteGammaTests.UniformExpansionMatchesMpmath
 """
 import sys
 from fractions import Fraction as F
@@ -185,10 +185,11 @@ def check():
 
 
 def cases():
-    """Test cases for IncompleteGammaTests.UniformExpansionMatchesMpmath: P and Q at doubles x across the
-    expansion's domain and just outside it, exact (40 digits) at the double inputs."""
+    """temme_cases.csv, read by IncompleteGammaTests.UniformExpansionMatchesMpmath: P and Q at doubles x across
+    the expansion's domain and just outside it, exact (40 digits) at the double inputs."""
     import mpmath as mp
     mp.mp.dps = 40
+    print("a,x,lower,upper,eta")
     for a in [50.0, 64.5, 200.0, 1234.5, 3e4, 1e6]:
         for eta in [-0.81, -0.8, -0.6, -0.3, -0.05, -1e-3, 0.0, 1e-3, 0.05, 0.3, 0.6, 0.8, 0.81]:
             if abs(eta) * a ** 0.5 > 37:
@@ -204,7 +205,7 @@ def cases():
             else:
                 upper = mp.gammainc(a, X, mp.inf, regularized=True)
                 lower = 1 - upper
-            print(f"    [InlineData({a!r}, {x!r}, {mp.nstr(lower, 22)}, {mp.nstr(upper, 22)})] // eta {eta}")
+            print(f"{a!r},{x!r},{mp.nstr(lower, 22)},{mp.nstr(upper, 22)},{eta}")
 
 
 if __name__ == "__main__":
